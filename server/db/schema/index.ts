@@ -1,0 +1,2 @@
+// Every table, one per file; drizzle.config.ts points here.
+export * from './studios';

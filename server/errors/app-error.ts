@@ -1,0 +1,35 @@
+/** Every error code the API answers with, and the HTTP status each one carries. */
+export const errorStatus = {
+  VALIDATION_FAILED: 400,
+  BAD_REQUEST: 400,
+  UNAUTHENTICATED: 401,
+  FORBIDDEN: 403,
+  NOT_FOUND: 404,
+  CONFLICT: 409,
+  PAYLOAD_TOO_LARGE: 413,
+  GEOMETRY_IMPOSSIBLE: 422,
+  RATE_LIMITED: 429,
+  INTERNAL: 500,
+  SERVICE_UNAVAILABLE: 503,
+} as const;
+export type ErrorCode = keyof typeof errorStatus;
+
+export interface ErrorIssue {
+  path: string;
+  message: string;
+}
+
+/** The one error type services throw; the error middleware turns it into the wire format. */
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly status: number;
+  readonly issues?: ErrorIssue[];
+
+  constructor(code: ErrorCode, message: string, issues?: ErrorIssue[]) {
+    super(message);
+    this.name = 'AppError';
+    this.code = code;
+    this.status = errorStatus[code];
+    this.issues = issues;
+  }
+}

@@ -1,0 +1,58 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { EnvError, parseEnv } from './config/env';
+import { createApp } from './app';
+import { createDatabase } from './db/client';
+import { createLogger } from './logger';
+
+// In-flight requests get this long to finish after Ctrl-C before their connections are cut.
+const SHUTDOWN_GRACE_MS = 10_000;
+
+function loadEnv() {
+  try {
+    return parseEnv(process.env);
+  } catch (error) {
+    if (error instanceof EnvError) {
+      process.stderr.write(`${error.message}\n`);
+      process.exit(1);
+    }
+    throw error;
+  }
+}
+
+const env = loadEnv();
+const logger = createLogger(env.LOG_LEVEL);
+const { db, pool } = createDatabase(env.DATABASE_URL);
+const clientDir = env.CLIENT_DIR ?? path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist');
+const app = createApp({ db, logger, clientDir });
+
+const server = app.listen(env.PORT, env.HOST);
+server.on('listening', () => {
+  logger.info({ url: `http://${env.HOST}:${env.PORT}` }, 'Seamwright is listening');
+  process.send?.({ type: 'listening', port: env.PORT });
+});
+server.on('error', (error: NodeJS.ErrnoException) => {
+  const hint =
+    error.code === 'EADDRINUSE'
+      ? `Port ${env.PORT} on ${env.HOST} is already in use. Stop the program using it, or pick another port: PORT=3100 npm start`
+      : `The server could not start: ${error.message}`;
+  process.stderr.write(`${hint}\n`);
+  process.exit(1);
+});
+
+let stopping = false;
+function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, 'shutting down: no new requests, finishing those in flight');
+  const force = setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS);
+  force.unref();
+  server.close(async () => {
+    await pool.end();
+    logger.info('stopped');
+    process.exit(0);
+  });
+  server.closeIdleConnections();
+}
+process.on('SIGINT', () => shutdown('SIGINT'));
+process.on('SIGTERM', () => shutdown('SIGTERM'));

@@ -1,0 +1,9 @@
+import { useState, type ReactNode } from 'react';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { createQueryClient } from '../lib/query-client';
+
+/** App-wide providers: the query cache now; sign-in state and preferences later. */
+export function AppProvider({ children }: { children: ReactNode }) {
+  const [queryClient] = useState(createQueryClient);
+  return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
+}
