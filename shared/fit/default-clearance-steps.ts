@@ -1,0 +1,71 @@
+import type { FitClass, Material, Process } from '../schemas/joint-options';
+import { clearanceDefaults } from './clearance-defaults';
+import { formatMm } from './format-mm';
+import { formatRange } from './format-range';
+import { materialAdjustments } from './material-adjustments';
+
+/** One step of a clearance derivation: what it is, how many mm per side it adds, where it comes from. */
+export interface ClearanceStep {
+  readonly label: string;
+  /** mm per side; negative steps take clearance away. */
+  readonly mm: number;
+  readonly source: string;
+}
+
+/** A derivation step with its words for the plain-text derivation. */
+export interface WordedStep {
+  readonly step: ClearanceStep;
+  readonly words: string;
+}
+
+/**
+ * The steps from the defaults to a clearance, without the final floor at 0 mm: the published default for
+ * the process and fit class, the material adjustment when it is not 0, the calibration offset when given.
+ *
+ * @param input - process (already defaulted), material, fit, optional calibration offset (mm per side) and source
+ * @returns the steps in order, each with its words; their `mm` add up to the clearance
+ * @throws RangeError for an unknown process, fit or material, or a calibration offset that is not finite
+ * @example
+ * defaultClearanceSteps({ process: 'fdm', material: 'PLA', fit: 'slide' });
+ * // [{ step: { label: 'slide fit default on FDM', mm: 0.25, source: … }, words: '0.25 mm from the published 0.2–0.3 mm range' }]
+ */
+export function defaultClearanceSteps(input: {
+  readonly process: Process;
+  readonly material: Material;
+  readonly fit: FitClass;
+  readonly calibrationOffset?: number;
+  readonly calibrationSource?: string;
+}): WordedStep[] {
+  const base = clearanceDefaults[input.process]?.[input.fit];
+  const adjustment = materialAdjustments[input.material];
+  // The types already rule these out; the checks are for callers that skipped the schema.
+  if (!base) throw new RangeError(`no default clearance for a ${input.fit} fit on ${input.process}`);
+  if (!adjustment) throw new RangeError(`unknown material ${input.material}`);
+
+  const range = formatRange(base.range);
+  const steps: WordedStep[] = [
+    {
+      step: {
+        label: `${input.fit} fit default on ${input.process === 'fdm' ? 'FDM' : 'resin'}`,
+        mm: base.mm,
+        source: `${base.source} (REFERENCES §7.2)`,
+      },
+      words: `${formatMm(base.mm)} from ${range}`,
+    },
+  ];
+  if (adjustment.mm !== 0) {
+    steps.push({
+      step: { label: `for ${input.material}`, mm: adjustment.mm, source: adjustment.source },
+      words: `${formatMm(adjustment.mm, true)} for ${input.material}`,
+    });
+  }
+  const offset = input.calibrationOffset;
+  if (offset !== undefined) {
+    if (!Number.isFinite(offset)) {
+      throw new RangeError(`calibrationOffset must be a finite number of mm per side; got ${offset}`);
+    }
+    const label = input.calibrationSource ?? "your printer's calibration";
+    steps.push({ step: { label, mm: offset, source: label }, words: `${label} ${formatMm(offset, true)}` });
+  }
+  return steps;
+}
