@@ -12,12 +12,21 @@ runDbCli('migrate', databaseUrl);
 runDbCli('seed', databaseUrl);
 
 const apiPort = process.env.API_PORT ?? '3001';
-const env = { ...process.env, NODE_ENV: 'development', DATABASE_URL: databaseUrl, PORT: apiPort, API_PORT: apiPort };
+// Links in e-mails point at Vite; the mail catcher runs inside the API (MAIL_CATCHER defaults to on).
+const env = {
+  ...process.env,
+  NODE_ENV: 'development',
+  DATABASE_URL: databaseUrl,
+  PORT: apiPort,
+  API_PORT: apiPort,
+  APP_URL: process.env.APP_URL ?? 'http://127.0.0.1:5173',
+};
 const children = [
   spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], { cwd: root, stdio: 'inherit', env }),
   spawn(process.execPath, ['node_modules/vite/bin/vite.js'], { cwd: root, stdio: 'inherit', env }),
 ];
 say('open http://127.0.0.1:5173 (Vite, hot reload); the API listens on port ' + apiPort);
+say('e-mails are caught locally: http://127.0.0.1:5173/dev/outbox');
 
 for (const signal of ['SIGINT', 'SIGTERM']) {
   process.on(signal, () => children.forEach((child) => child.kill(signal)));

@@ -6,19 +6,54 @@ import { requestLogger } from './http/request-logger';
 import { securityHeaders } from './http/security-headers';
 import { clientApp } from './http/client-app';
 import { healthRoutes } from './modules/health/health.routes';
+import { kitRoutes } from './modules/kits/kits.routes';
+import { accountRoutes } from './modules/accounts/account.routes';
+import { authRoutes } from './modules/auth/auth.routes';
+import { auditRoutes } from './modules/audit/audit.routes';
+import { invitationsRoutes } from './modules/invitations/invitations.routes';
+import { membersRoutes } from './modules/teams/members.routes';
+import { teamsRoutes } from './modules/teams/teams.routes';
+import { outboxRoutes, type Outbox } from './modules/dev-outbox/outbox.routes';
+import { createSessions } from './auth/sessions';
+import { authenticate } from './http/authenticate';
+import { sameOrigin } from './http/same-origin';
+import { createDroppingMailer, type Mailer } from './mail/mailer';
+import { createLinks } from './mail/links';
+import { defaultAuthSettings, type AuthSettings } from './config/auth-settings';
+import type { AppContext } from './app-context';
 
 export interface AppDeps {
   db: Database;
   logger: Logger;
   /** Folder of the built client (dist/); omitted in API-only tests. */
   clientDir?: string;
+  /** Outgoing mail; without one, messages are dropped (API tests that send none). */
+  mailer?: Mailer;
+  /** The local mail catcher's messages; when given, GET /api/dev/outbox lists them (never in production). */
+  outbox?: Outbox;
+  /** App address and rate limits; defaults suit tests of other features. */
+  auth?: AuthSettings;
 }
 
 // Kit requests are small JSON; 256 kB leaves room for a 1000-point polygon face.
 const JSON_LIMIT = '256kb';
 
 /** Builds the Express app without listening, so tests drive it through supertest. */
-export function createApp({ db, logger, clientDir }: AppDeps): express.Express {
+export function createApp({
+  db,
+  logger,
+  clientDir,
+  mailer,
+  outbox,
+  auth = defaultAuthSettings,
+}: AppDeps): express.Express {
+  const ctx: AppContext = {
+    db,
+    logger,
+    sessions: createSessions(db),
+    mailer: mailer ?? createDroppingMailer(logger),
+    links: createLinks(auth.appUrl),
+  };
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -27,7 +62,17 @@ export function createApp({ db, logger, clientDir }: AppDeps): express.Express {
   app.use(express.json({ limit: JSON_LIMIT }));
 
   const api = express.Router();
+  api.use(sameOrigin(auth.appUrl));
+  api.use(authenticate(ctx.sessions));
   api.use(healthRoutes(db));
+  api.use(kitRoutes());
+  api.use(authRoutes(ctx, auth.rateLimits));
+  api.use(accountRoutes(ctx));
+  api.use(teamsRoutes(ctx));
+  api.use(membersRoutes(ctx));
+  api.use(invitationsRoutes(ctx));
+  api.use(auditRoutes(ctx));
+  if (outbox) api.use(outboxRoutes(outbox));
   api.use(apiNotFound);
   app.use('/api', api);
 

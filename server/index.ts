@@ -4,6 +4,10 @@ import { EnvError, parseEnv } from './config/env';
 import { createApp } from './app';
 import { createDatabase } from './db/client';
 import { createLogger } from './logger';
+import { authSettingsFromEnv } from './config/auth-settings';
+import { startMailCatcher, type MailCatcher } from './mail/catcher';
+import { createSmtpMailer } from './mail/mailer';
+import { createSessions } from './auth/sessions';
 
 // In-flight requests get this long to finish after Ctrl-C before their connections are cut.
 const SHUTDOWN_GRACE_MS = 10_000;
@@ -24,7 +28,30 @@ const env = loadEnv();
 const logger = createLogger(env.LOG_LEVEL);
 const { db, pool } = createDatabase(env.DATABASE_URL);
 const clientDir = env.CLIENT_DIR ?? path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist');
-const app = createApp({ db, logger, clientDir });
+
+// With MAIL_CATCHER=on (development, tests, the `npm start` demo) a local SMTP server inside this
+// process receives every message, and /dev/outbox shows them; nothing leaves the machine.
+let catcher: MailCatcher | undefined;
+if (env.MAIL_CATCHER === 'on') {
+  catcher = await startMailCatcher();
+  logger.info({ smtp: `${catcher.host}:${catcher.port}` }, 'local mail catcher is running; messages at /dev/outbox');
+}
+const mailer = createSmtpMailer({
+  host: catcher?.host ?? env.SMTP_HOST ?? '127.0.0.1',
+  port: catcher?.port ?? env.SMTP_PORT,
+  secure: catcher ? false : env.SMTP_SECURE,
+  user: catcher ? undefined : env.SMTP_USER,
+  password: env.SMTP_PASSWORD,
+  from: env.MAIL_FROM,
+});
+// Sessions that are never used again stay in the table until swept; once an hour is plenty.
+const sweep = setInterval(() => {
+  createSessions(db)
+    .sweepExpired()
+    .catch((error: unknown) => logger.warn({ err: error }, 'could not delete expired sessions'));
+}, 60 * 60_000);
+sweep.unref();
+const app = createApp({ db, logger, clientDir, mailer, outbox: catcher, auth: authSettingsFromEnv(env) });
 
 const server = app.listen(env.PORT, env.HOST);
 server.on('listening', () => {
@@ -48,6 +75,7 @@ function shutdown(signal: string) {
   const force = setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS);
   force.unref();
   server.close(async () => {
+    await catcher?.close();
     await pool.end();
     logger.info('stopped');
     process.exit(0);

@@ -4,6 +4,8 @@ export const errorStatus = {
   BAD_REQUEST: 400,
   UNAUTHENTICATED: 401,
   FORBIDDEN: 403,
+  // The account must confirm its e-mail address first (inviting, accepting invitations).
+  EMAIL_UNVERIFIED: 403,
   NOT_FOUND: 404,
   CONFLICT: 409,
   PAYLOAD_TOO_LARGE: 413,

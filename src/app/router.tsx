@@ -1,7 +1,13 @@
-import { createBrowserRouter } from 'react-router-dom';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { AppLayout } from '../components/layout/app-layout';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
+
+// The outbox page exists in development builds and in the `npm start` demo build only.
+const withOutbox = import.meta.env.DEV || import.meta.env.VITE_DEV_OUTBOX === '1';
+const outbox: RouteObject[] = withOutbox
+  ? [{ path: 'dev/outbox', lazy: async () => ({ Component: (await import('./routes/dev-outbox')).DevOutboxRoute }) }]
+  : [];
 
 /** Every page of the app; feature screens arrive as lazy routes so each loads its own code. */
 export const router = createBrowserRouter([
@@ -9,6 +15,23 @@ export const router = createBrowserRouter([
     element: <AppLayout />,
     children: [
       { index: true, element: <HomeRoute /> },
+      { path: 'sign-up', lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }) },
+      { path: 'sign-in', lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
+      {
+        path: 'reset-password',
+        lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }),
+      },
+      {
+        path: 'verify-email',
+        lazy: async () => ({ Component: (await import('./routes/verify-email')).VerifyEmailRoute }),
+      },
+      {
+        path: 'invitations/accept',
+        lazy: async () => ({ Component: (await import('./routes/accept-invitation')).AcceptInvitationRoute }),
+      },
+      { path: 'team', lazy: async () => ({ Component: (await import('./routes/team')).TeamRoute }) },
+      { path: 'account', lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }) },
+      ...outbox,
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -1,10 +1,13 @@
 import { NavLink, Outlet } from 'react-router-dom';
+import { SessionNav } from '../../features/auth/components/session-nav';
+import { useMe } from '../../lib/session';
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   `rounded-md px-3 py-2 font-medium ${isActive ? 'bg-ink text-paper' : 'text-ink hover:bg-paper-deep'}`;
 
 /** The frame of every page: name and navigation on top, version at the bottom. */
 export function AppLayout() {
+  const { data: me } = useMe();
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b-4 border-kiln bg-paper">
@@ -17,7 +20,13 @@ export function AppLayout() {
             <NavLink to="/" end className={navLinkClass}>
               Home
             </NavLink>
+            {me && (
+              <NavLink to="/team" className={navLinkClass}>
+                Team
+              </NavLink>
+            )}
           </nav>
+          <SessionNav />
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8">

@@ -17,7 +17,7 @@ describe('migrateDatabase', () => {
     await admin.end();
   });
 
-  it('creates every table on an empty database, and seeding twice keeps one demo studio', async () => {
+  it('creates every table on an empty database, and seeding twice keeps one demo studio and its three people', async () => {
     await admin.connect();
     await admin.query(`CREATE DATABASE ${name}`);
     const url = new URL(adminUrl ?? '');
@@ -29,11 +29,19 @@ describe('migrateDatabase', () => {
       const tables = await db.execute(
         sql`select table_name from information_schema.tables where table_schema = 'public'`,
       );
-      expect(tables.rows.map((r) => r.table_name)).toContain('studios');
+      expect(tables.rows.map((r) => r.table_name)).toEqual(
+        expect.arrayContaining(['users', 'sessions', 'teams', 'team_members', 'invitations', 'audit_events']),
+      );
       await seedDemoData(db);
       await seedDemoData(db);
-      const count = await db.execute(sql`select count(*)::int as n from studios`);
-      expect(count.rows[0]?.n).toBe(1);
+      const studios = await db.execute(sql`select id from teams where name = 'Quillmoss Prop Studio'`);
+      expect(studios.rows).toHaveLength(1);
+      const roles = await db.execute(
+        sql`select role::text as role from team_members where team_id = ${studios.rows[0]?.id} order by role::text`,
+      );
+      expect(roles.rows.map((r) => r.role)).toEqual(['editor', 'owner', 'viewer']);
+      const people = await db.execute(sql`select count(*)::int as n from users where email like '%@quillmoss.example'`);
+      expect(people.rows[0]?.n).toBe(3);
     } finally {
       await pool.end();
     }

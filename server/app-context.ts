@@ -1,0 +1,14 @@
+import type { Logger } from 'pino';
+import type { Database } from './db/client';
+import type { Sessions } from './auth/sessions';
+import type { Mailer } from './mail/mailer';
+import type { Links } from './mail/links';
+
+/** What services need from the outside world; built once in app.ts, never holds request data. */
+export interface AppContext {
+  db: Database;
+  sessions: Sessions;
+  mailer: Mailer;
+  links: Links;
+  logger: Logger;
+}

@@ -1,0 +1,34 @@
+import type { RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { AppError } from '../errors/app-error';
+
+export interface RateLimitSettings {
+  windowMs: number;
+  /** Attempts per window per client address. */
+  limit: number;
+}
+
+/**
+ * A per-address limit for one family of routes (sign-in, sign-up, reset). Past it the request is
+ * answered 429 in the usual error shape, with Retry-After in seconds.
+ */
+export function limitRate(what: string, { windowMs, limit }: RateLimitSettings): RequestHandler {
+  return rateLimit({
+    windowMs,
+    limit,
+    standardHeaders: 'draft-7',
+    legacyHeaders: false,
+    handler: (req, res, next) => {
+      const resetTime = (req as { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      const seconds = resetTime ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 1000)) : 60;
+      res.setHeader('Retry-After', String(seconds));
+      const minutes = Math.ceil(seconds / 60);
+      next(
+        new AppError(
+          'RATE_LIMITED',
+          `Too many ${what} attempts from here. Please wait ${minutes} minute${minutes === 1 ? '' : 's'} and try again.`,
+        ),
+      );
+    },
+  });
+}

@@ -1,0 +1,76 @@
+import { Router, type Request } from 'express';
+import type { AppContext } from '../../app-context';
+import { clearSessionCookie, readSessionCookie, writeSessionCookie } from '../../auth/sessions';
+import { requireSession, requireUser } from '../../http/current-user';
+import { parseWith } from '../../http/parse';
+import { limitRate, type RateLimitSettings } from '../../http/rate-limit';
+import {
+  resetConfirmSchema,
+  resetRequestSchema,
+  signInSchema,
+  signUpSchema,
+  verifyEmailSchema,
+} from '../../../shared/schemas/auth';
+import { signIn, signUp } from './auth.service';
+import { resendVerification, verifyEmail } from './email-verification.service';
+import { requestPasswordReset, resetPassword } from './password-reset.service';
+
+export interface AuthRateLimits {
+  signIn: RateLimitSettings;
+  signUp: RateLimitSettings;
+  reset: RateLimitSettings;
+}
+
+const RESET_ANSWER = 'If an account uses this address, we have sent it a link to choose a new password.';
+
+/**
+ * POST /api/auth/sign-up · sign-in · sign-out · sign-out-everywhere · verify-email ·
+ * resend-verification · password-reset/request · password-reset/confirm. Sign-in, sign-up and the
+ * mail-sending routes are rate-limited per client address.
+ */
+export function authRoutes(ctx: AppContext, limits: AuthRateLimits): Router {
+  const router = Router();
+  const secure = (req: Request) => req.secure;
+  const resetLimit = limitRate('password reset', limits.reset);
+
+  router.post('/auth/sign-up', limitRate('sign-up', limits.signUp), async (req, res) => {
+    const { session, me } = await signUp(ctx, parseWith(signUpSchema, req.body));
+    writeSessionCookie(res, session, secure(req));
+    res.status(201).json(me);
+  });
+  router.post('/auth/sign-in', limitRate('sign-in', limits.signIn), async (req, res) => {
+    const input = parseWith(signInSchema, req.body);
+    const { session, me } = await signIn(ctx, input, readSessionCookie(req.headers.cookie));
+    writeSessionCookie(res, session, secure(req));
+    res.json(me);
+  });
+  router.post('/auth/sign-out', async (req, res) => {
+    if (req.auth) await ctx.sessions.end(req.auth.session.id);
+    clearSessionCookie(res, secure(req));
+    res.status(204).end();
+  });
+  router.post('/auth/sign-out-everywhere', async (req, res) => {
+    await ctx.sessions.endAllForUser(requireSession(req).user.id);
+    clearSessionCookie(res, secure(req));
+    res.status(204).end();
+  });
+  router.post('/auth/verify-email', async (req, res) => {
+    await verifyEmail(ctx, parseWith(verifyEmailSchema, req.body).token);
+    res.json({ verified: true });
+  });
+  router.post('/auth/resend-verification', limitRate('confirmation e-mail', limits.reset), async (req, res) => {
+    await resendVerification(ctx, requireUser(req));
+    res.status(204).end();
+  });
+  router.post('/auth/password-reset/request', resetLimit, async (req, res) => {
+    await requestPasswordReset(ctx, parseWith(resetRequestSchema, req.body).email);
+    res.status(202).json({ message: RESET_ANSWER });
+  });
+  router.post('/auth/password-reset/confirm', resetLimit, async (req, res) => {
+    const { token, password } = parseWith(resetConfirmSchema, req.body);
+    await resetPassword(ctx, token, password);
+    clearSessionCookie(res, secure(req));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,23 @@
+import { forwardRef, type SelectHTMLAttributes } from 'react';
+import type { Role } from '../../../../shared/schemas/team';
+
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner — everything, including members',
+  editor: 'Editor — creates and changes presets and profiles',
+  viewer: 'Viewer — sees everything, downloads kits',
+};
+
+/** A select of the three roles; label it from outside (the table and the form word it differently). */
+export const RoleSelect = forwardRef<HTMLSelectElement, SelectHTMLAttributes<HTMLSelectElement>>(
+  function RoleSelect(props, ref) {
+    return (
+      <select ref={ref} {...props} className="rounded-md border border-ink-faint bg-white px-2 py-2">
+        {(Object.keys(roleLabels) as Role[]).map((role) => (
+          <option key={role} value={role}>
+            {roleLabels[role]}
+          </option>
+        ))}
+      </select>
+    );
+  },
+);
