@@ -21,7 +21,11 @@ export async function writeZip(entries: ZipEntry[], out: Writable): Promise<void
     out.on('finish', () => resolve());
   });
   archive.pipe(out);
-  for (const entry of entries) archive.append(Buffer.from(entry.bytes.buffer, entry.bytes.byteOffset, entry.bytes.byteLength), { name: entry.name, date: FIXED_DATE });
+  for (const entry of entries)
+    archive.append(Buffer.from(entry.bytes.buffer, entry.bytes.byteOffset, entry.bytes.byteLength), {
+      name: entry.name,
+      date: FIXED_DATE,
+    });
   await archive.finalize();
   await done;
 }

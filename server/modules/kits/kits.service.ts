@@ -25,7 +25,10 @@ export function kitFileName(request: ResolvedKitRequest): string {
  * Builds the kit; impossible geometry throws a GeometryError here, before any byte or header is sent.
  * The returned `writeTo` streams the zip.
  */
-export function prepareKitZip(request: ResolvedKitRequest): { fileName: string; writeTo: (out: Writable) => Promise<void> } {
+export function prepareKitZip(request: ResolvedKitRequest): {
+  fileName: string;
+  writeTo: (out: Writable) => Promise<void>;
+} {
   const entries = kitEntries(buildKit(request));
   return { fileName: kitFileName(request), writeTo: (out) => writeZip(entries, out) };
 }

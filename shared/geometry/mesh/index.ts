@@ -4,3 +4,4 @@ export { geom3ToMesh } from './geom3-to-mesh';
 export { meshVolume } from './mesh-volume';
 export type { Bounds3 } from './mesh-bounds';
 export { meshBounds } from './mesh-bounds';
+export { manifoldToMesh, type IndexedMesh } from './manifold-to-mesh';

@@ -20,7 +20,10 @@ const dovetailKit = {
 };
 
 // supertest collects a binary body only with an explicit parser.
-function binary(res: NodeJS.ReadableStream & { setEncoding(e: string): void }, done: (e: Error | null, b?: Buffer) => void) {
+function binary(
+  res: NodeJS.ReadableStream & { setEncoding(e: string): void },
+  done: (e: Error | null, b?: Buffer) => void,
+) {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => done(null, Buffer.concat(chunks)));
@@ -33,7 +36,9 @@ describe('POST /api/kits', () => {
     const res = await request(app).post('/api/kits').send(keyKit).buffer(true).parse(binary);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/zip');
-    expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?seamwright-key-kit-[0-9a-f]{8}\.zip"?$/);
+    expect(res.headers['content-disposition']).toMatch(
+      /^attachment; filename="?seamwright-key-kit-[0-9a-f]{8}\.zip"?$/,
+    );
     const zip = await JSZip.loadAsync(res.body as Buffer);
     const names = Object.keys(zip.files).sort();
     expect(names).toEqual(['README.txt', 'key.stl', 'manifest.json', 'pocket-cutter-A.stl', 'pocket-cutter-B.stl']);
@@ -73,7 +78,11 @@ describe('POST /api/kits', () => {
   it('answers 422 with the numbers when the keys cannot fit the face', async () => {
     const res = await request(app)
       .post('/api/kits')
-      .send({ ...keyKit, face: { shape: 'rect', width: 12, height: 60 }, key: { shape: 'square', width: 10, depth: 8, margin: 3 } });
+      .send({
+        ...keyKit,
+        face: { shape: 'rect', width: 12, height: 60 },
+        key: { shape: 'square', width: 10, depth: 8, margin: 3 },
+      });
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('GEOMETRY_IMPOSSIBLE');
     expect(res.body.error.message).toMatch(/\d+(\.\d+)? mm/);
@@ -93,7 +102,12 @@ describe('POST /api/kits', () => {
   });
 
   it('answers 422 for a self-intersecting polygon face', async () => {
-    const bowTie = [[-20, -20], [20, 20], [20, -20], [-20, 20]];
+    const bowTie = [
+      [-20, -20],
+      [20, 20],
+      [20, -20],
+      [-20, 20],
+    ];
     const res = await request(app)
       .post('/api/kits')
       .send({ ...keyKit, face: { shape: 'polygon', points: bowTie } });
@@ -113,6 +127,8 @@ describe('POST /api/kits/summary', () => {
     const manifest = JSON.parse(await zip.file('manifest.json')!.async('string'));
     expect(summary.body).toEqual(manifest);
     expect(summary.body.clearancePerSide).toBeGreaterThan(0);
-    expect(summary.body.parts.find((p: { role: string }) => p.role === 'pocket-cutter' && p.half === 'A').positions).toHaveLength(8);
+    expect(
+      summary.body.parts.find((p: { role: string }) => p.role === 'pocket-cutter' && p.half === 'A').positions,
+    ).toHaveLength(8);
   });
 });
