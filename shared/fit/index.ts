@@ -24,3 +24,4 @@ export { isoFitClearance, type IsoFitClearance } from './iso-fit-clearance';
 export { dowelPocketDiameter, type DowelPocket } from './dowel-pocket-diameter';
 export { isoFitSchema } from './iso-fit-schema';
 export { isoGrades, shaftLetters, type IsoGrade, type ShaftLetter } from './iso286-tables';
+export { deriveCalibration, type CalibrationReading } from './derive-calibration';
