@@ -12,9 +12,9 @@ import type { CandidateSearch } from './search-candidates';
  * Places up to `want` keys as far apart as the candidates allow. Farthest-point selection first;
  * when it runs out of room before `want`, a dense lattice packing is tried and, if it holds more,
  * the keys are picked from it (farthest-point again, so they still spread). Then refinement
- * passes push the keys further apart, and regular grid layouts (rows × columns = want) compete
- * with the result: the largest smallest distance between keys wins. Every step keeps the walls,
- * so the result is always legal.
+ * passes push the keys further apart, and the best regular grid layout (rows × columns = want),
+ * spread the same way, competes with the result: the largest smallest distance between keys
+ * wins. Every step keeps the walls, so the result is always legal.
  *
  * @param region - the layout problem
  * @param search - the candidate centres
@@ -25,24 +25,26 @@ import type { CandidateSearch } from './search-candidates';
  */
 export function arrangeKeys(region: KeyRegion, search: CandidateSearch, want: number): Point2[] {
   let source: PointSet = search.points;
-  let picks = farthestPointKeys(source, want, region.spaced);
+  let picks = farthestPointKeys(source, want, region);
   if (picks.length < want) {
     const lattice = latticeKeys(region, search, want);
     if (lattice.n > picks.length) {
       source = lattice;
-      picks = farthestPointKeys(lattice, want, region.spaced);
+      picks = farthestPointKeys(lattice, want, region);
     }
   }
-  let keys = refineKeys(
+  const keys = refineKeys(
     picks.map((i): Point2 => [source.xs[i]!, source.ys[i]!]),
     search.points,
-    region.spaced,
+    region,
   );
   if (source !== search.points || keys.length < 4) return keys;
-  // Regular grids as rival starting points; a rival must beat the spread by more than rounding.
-  for (const seed of gridSeedKeys(search.points, keys.length, region.spaced)) {
-    const rival = refineKeys(seed, search.points, region.spaced);
-    if (minKeyDistance(rival) > minKeyDistance(keys) * (1 + 1e-9)) keys = rival;
+  // The best regular grid, spread further, is the rival; it must win by more than rounding.
+  let seed: Point2[] | null = null;
+  for (const grid of gridSeedKeys(search.points, keys.length, region.spaced)) {
+    if (!seed || minKeyDistance(grid) > minKeyDistance(seed)) seed = grid;
   }
-  return keys;
+  if (!seed) return keys;
+  const rival = refineKeys(seed, search.points, region);
+  return minKeyDistance(rival) > minKeyDistance(keys) * (1 + 1e-9) ? rival : keys;
 }

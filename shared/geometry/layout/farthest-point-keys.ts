@@ -1,3 +1,4 @@
+import type { Spacing } from './key-region';
 import type { PointSet } from './point-set';
 
 /**
@@ -8,17 +9,15 @@ import type { PointSet } from './point-set';
  *
  * @param cands - candidate centres (mm)
  * @param want - most picks wanted
- * @param spaced - whether two pockets (dx, dy) apart (mm) keep the required wall
+ * @param spacing - whether two pockets (dx, dy) apart (mm) keep the required wall, and the
+ *   centre distance beyond which they always do
  * @returns indices into `cands`, in pick order
  * @example
- * farthestPointKeys(pointSet([-1, 0, 1], [0, 0, 0]), 2, () => true); // [0, 2]
+ * farthestPointKeys(pointSet([-1, 0, 1], [0, 0, 0]), 2, region); // [0, 2]
  */
-export function farthestPointKeys(
-  cands: PointSet,
-  want: number,
-  spaced: (dx: number, dy: number) => boolean,
-): number[] {
+export function farthestPointKeys(cands: PointSet, want: number, spacing: Spacing): number[] {
   const { xs, ys, n } = cands;
+  const clash2 = spacing.clashDistance * spacing.clashDistance;
   const picks: number[] = [];
   if (n === 0 || want < 1) return picks;
   const minD2 = new Float64Array(n);
@@ -35,7 +34,7 @@ export function farthestPointKeys(
       const dy = ys[c]! - py;
       const d2 = dx * dx + dy * dy;
       if (picks.length === 1 || d2 < minD2[c]!) minD2[c] = d2;
-      if (blocked[c] === 0 && !spaced(dx, dy)) blocked[c] = 1;
+      if (blocked[c] === 0 && d2 <= clash2 && !spacing.spaced(dx, dy)) blocked[c] = 1;
     }
     next = argMax(minD2, blocked, 0);
   }

@@ -18,7 +18,12 @@ export type KeyRegion = {
   readonly fits: (x: number, y: number) => boolean;
   /** Two pockets (dx, dy) apart keep at least `margin` between them. */
   readonly spaced: (dx: number, dy: number) => boolean;
+  /** Pockets whose centres are farther apart than this (mm) always keep the margin: a cheap pre-check. */
+  readonly clashDistance: number;
 };
+
+/** What the key pickers need to know about spacing. */
+export type Spacing = Pick<KeyRegion, 'spaced' | 'clashDistance'>;
 
 /**
  * Sets up the layout problem for one face, footprint and margin.
@@ -43,5 +48,10 @@ export function keyRegion(face: Face, footprint: Footprint, margin: number, keyL
     wall,
     fits: (x, y) => wall(x, y) >= least,
     spaced: (dx, dy) => pocketGap(footprint, dx, dy) >= least,
+    // Corner to corner for rectangles, plus the margin on each axis: beyond that, no clash.
+    clashDistance:
+      footprint.kind === 'circle'
+        ? footprint.diameter + margin
+        : Math.sqrt((footprint.width + margin) ** 2 + (footprint.height + margin) ** 2),
   };
 }

@@ -35,8 +35,9 @@ export type PlaceKeysParams = {
  * apart as the face allows while keeping `margin` of wall between every pocket and the face edge
  * and between every two pockets. One key goes at the centre (or the most interior spot when the
  * centre does not fit); 3 or more never all sit on one line (see {@link MIN_STAGGER_MM}).
- * Deterministic: plain arithmetic and a bounded candidate search (at most about 5,000 centres),
- * so the same parameters give exactly the same positions in the browser and on the server.
+ * Deterministic: plain arithmetic (no trigonometry, no randomness) and bounded work (at most
+ * about 5,000 candidate centres and 40,000 wall evaluations, each against nearby polygon edges
+ * only), so the same parameters give exactly the same positions in the browser and on the server.
  *
  * @param params - face, footprint, margin (mm), optional count, key label
  * @returns key centres [x, y] in mm, sorted by x then y
@@ -94,24 +95,18 @@ function singleKey(region: KeyRegion, search: CandidateSearch): Point2 {
 }
 
 function staggered(keys: Point2[], region: KeyRegion, search: CandidateSearch, params: PlaceKeysParams): Point2[] {
-  const moved = staggerKeys(keys, search.points, region.spaced, MIN_STAGGER_MM);
+  const { xs, ys, n } = search.points;
+  const room = pointSetWidth(Array.from({ length: n }, (_, c): Point2 => [xs[c]!, ys[c]!]));
+  // When all the room is one narrow strip, no move can stagger the keys: skip the search.
+  const moved = room < MIN_STAGGER_MM ? null : staggerKeys(keys, search.points, region.spaced, MIN_STAGGER_MM);
   if (moved) {
     // Spread them again, unless that pulls them back onto one line.
-    const spread = refineKeys(moved, search.points, region.spaced);
+    const spread = refineKeys(moved, search.points, region);
     return pointSetWidth(spread) >= MIN_STAGGER_MM ? spread : moved;
   }
   if (params.count === undefined) return arrangeKeys(region, search, 2);
-  const room = pointSetWidth(
-    Array.from({ length: search.points.n }, (_, c): Point2 => [search.points.xs[c]!, search.points.ys[c]!]),
-  );
-  throw keyLayoutError({
-    kind: 'one-line',
-    keyLabel: params.keyLabel,
-    margin: params.margin,
-    asked: params.count,
-    room,
-    needed: MIN_STAGGER_MM,
-  });
+  const { keyLabel, margin, count } = params;
+  throw keyLayoutError({ kind: 'one-line', keyLabel, margin, asked: count, room, needed: MIN_STAGGER_MM });
 }
 
 function checkParams({ face, footprint, margin, count }: PlaceKeysParams): void {

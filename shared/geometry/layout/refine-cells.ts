@@ -2,7 +2,7 @@ import type { GridLevel } from './grid-level';
 import type { KeyRegion } from './key-region';
 import { LAYOUT_EPS_MM } from './layout-tolerance';
 
-/** Square cells around sample points; parallel lists, lengths in mm. */
+/** Cells (centre, half width, half height, wall at the centre) as parallel lists, in mm. */
 export type CellSet = { x: number[]; y: number[]; hx: number[]; hy: number[]; wall: number[] };
 
 /** Stop densifying cells that fit once this many do. */

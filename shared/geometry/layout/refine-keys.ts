@@ -1,4 +1,5 @@
 import type { Point2 } from './footprint';
+import type { Spacing } from './key-region';
 import type { PointSet } from './point-set';
 
 /** Passes over all keys; each pass moves each key at most once. */
@@ -13,15 +14,16 @@ const PASSES = 6;
  *
  * @param keys - starting key centres (mm); not mutated
  * @param cands - centres the keys may move to (mm)
- * @param spaced - whether two pockets (dx, dy) apart (mm) keep the required wall
+ * @param spacing - whether two pockets (dx, dy) apart (mm) keep the required wall, and the
+ *   centre distance beyond which they always do
  * @returns the moved key centres (mm), same count and order
  * @example
- * refineKeys([[0, 0], [1, 0]], pointSet([-5, 0, 5], [0, 0, 0]), () => true); // [[-5, 0], [5, 0]]
+ * refineKeys([[0, 0], [1, 0]], pointSet([-5, 0, 5], [0, 0, 0]), region); // [[-5, 0], [5, 0]]
  */
-export function refineKeys(keys: Point2[], cands: PointSet, spaced: (dx: number, dy: number) => boolean): Point2[] {
+export function refineKeys(keys: Point2[], cands: PointSet, spacing: Spacing): Point2[] {
   const k = keys.length;
   if (k < 2 || cands.n === 0) return keys.map(([x, y]): Point2 => [x, y]);
-  const state = nearState(keys, cands, spaced);
+  const state = nearState(keys, cands, spacing);
   for (let pass = 0; pass < PASSES; pass++) {
     let moved = false;
     for (let i = 0; i < k; i++) {
@@ -41,6 +43,8 @@ type NearState = {
   ky: Float64Array;
   cands: PointSet;
   spaced: (dx: number, dy: number) => boolean;
+  /** Squared centre distance beyond which two pockets never clash (mm²). */
+  clash2: number;
   /** Per candidate: nearest key, its squared distance, second nearest key, its squared distance. */
   near1: Int32Array;
   d1: Float64Array;
@@ -50,13 +54,14 @@ type NearState = {
   clash: Int32Array;
 };
 
-function nearState(keys: Point2[], cands: PointSet, spaced: NearState['spaced']): NearState {
+function nearState(keys: Point2[], cands: PointSet, { spaced, clashDistance }: Spacing): NearState {
   const n = cands.n;
   const state: NearState = {
     kx: Float64Array.from(keys, (p) => p[0]),
     ky: Float64Array.from(keys, (p) => p[1]),
     cands,
     spaced,
+    clash2: clashDistance * clashDistance,
     near1: new Int32Array(n),
     d1: new Float64Array(n),
     near2: new Int32Array(n),
@@ -118,17 +123,18 @@ function moveKey(s: NearState, i: number, target: number): void {
   s.kx[i] = xs[target]!;
   s.ky[i] = ys[target]!;
   for (let c = 0; c < n; c++) {
-    const wasClash = s.spaced(xs[c]! - ox, ys[c]! - oy) ? 0 : 1;
-    const isClash = s.spaced(xs[c]! - s.kx[i]!, ys[c]! - s.ky[i]!) ? 0 : 1;
-    s.clash[c] = s.clash[c]! + isClash - wasClash;
-    if (s.near1[c] === i || s.near2[c] === i) {
-      recomputeNear(s, c);
-      continue;
-    }
     const dx = xs[c]! - s.kx[i]!;
     const dy = ys[c]! - s.ky[i]!;
     const d = dx * dx + dy * dy;
-    if (d < s.d1[c]!) [s.near2[c], s.d2[c], s.near1[c], s.d1[c]] = [s.near1[c]!, s.d1[c]!, i, d];
+    const dOld = (xs[c]! - ox) ** 2 + (ys[c]! - oy) ** 2;
+    // Clashes only change near the old or the new spot; far away the spacing test is skipped.
+    if (d <= s.clash2 || dOld <= s.clash2) {
+      const wasClash = s.spaced(xs[c]! - ox, ys[c]! - oy) ? 0 : 1;
+      const isClash = s.spaced(dx, dy) ? 0 : 1;
+      s.clash[c] = s.clash[c]! + isClash - wasClash;
+    }
+    if (s.near1[c] === i || s.near2[c] === i) recomputeNear(s, c);
+    else if (d < s.d1[c]!) [s.near2[c], s.d2[c], s.near1[c], s.d1[c]] = [s.near1[c]!, s.d1[c]!, i, d];
     else if (d < s.d2[c]!) [s.near2[c], s.d2[c]] = [i, d];
   }
 }

@@ -31,7 +31,7 @@ export type CandidateSearch = {
 /**
  * Finds candidate pocket centres: a uniform grid over the box of possible centres, points
  * bisected onto the edge of the region where pockets fit, and, when the grid resolves that region
- * poorly, adaptive refinement around the most promising cells. At most about 16,000 wall
+ * poorly, adaptive refinement around the most promising cells. At most about 19,000 wall
  * evaluations and 5,000 candidates, whatever the face. A region thinner than the refinement can
  * resolve within that budget may be missed; the result is then a (numbered) "does not fit".
  *

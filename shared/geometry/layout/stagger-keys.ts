@@ -4,12 +4,14 @@ import { pointSetWidth } from './point-set-width';
 
 /** Width tests per key: the best-spread candidates are tried first, so few are ever needed. */
 const MAX_TESTS_PER_KEY = 200;
+/** Keys tried for the move (spread evenly over the list); bounds the work for long rows. */
+const MAX_KEYS_TRIED = 16;
 
 /**
  * Takes 3 or more keys that (nearly) lie on one line and moves one of them so they span at least
- * `minWidth` across any line, choosing, over every key and candidate, the move that leaves the
- * keys farthest apart (the largest distance from the moved key to its nearest other key).
- * Candidates must keep the required wall to the other keys.
+ * `minWidth` across any line. Of all moves (up to 16 keys tried, every candidate), it keeps the
+ * one that leaves the keys farthest apart: the largest distance from the moved key to its nearest
+ * other key. Candidates must keep the required wall to the other keys.
  *
  * @param keys - key centres (mm), 3 or more; not mutated
  * @param cands - centres a key may move to (mm)
@@ -27,7 +29,8 @@ export function staggerKeys(
 ): Point2[] | null {
   let best: Point2[] | null = null;
   let bestSpread = -1;
-  for (let i = 0; i < keys.length; i++) {
+  const step = Math.max(1, Math.ceil(keys.length / MAX_KEYS_TRIED));
+  for (let i = 0; i < keys.length; i += step) {
     const others = keys.filter((_, j) => j !== i);
     const ranked = rankMoves(others, cands, spaced);
     for (const { c, spread } of ranked.slice(0, MAX_TESTS_PER_KEY)) {
