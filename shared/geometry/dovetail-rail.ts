@@ -1,4 +1,4 @@
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from './solid/jscad-types';
 import type { DovetailSectionParams } from './section/dovetail-section';
 import { keptFeature } from './min-feature';
 import { dovetailSection } from './section/dovetail-section';

@@ -1,4 +1,4 @@
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from './solid/jscad-types';
 import { CUTTER_OVERSHOOT_MM } from './pocket-cutter';
 import type { DovetailSectionParams } from './section/dovetail-section';
 import { dovetailSection } from './section/dovetail-section';
@@ -32,5 +32,11 @@ export function dovetailSlotCutter(params: DovetailSlotCutterParams): Geom3 {
   const { x, y0, y1, clearance } = params;
   const ring = offsetConvexPolygon(dovetailSection(params), [CUTTER_OVERSHOOT_MM, clearance, clearance, clearance]);
   // Same proper rotation as the rail: loft along w = −y.
-  return loftSolid([{ w: -y1, ring }, { w: -y0, ring }], (u, v, w) => [x + u, 0 - w, v]);
+  return loftSolid(
+    [
+      { w: -y1, ring },
+      { w: -y0, ring },
+    ],
+    (u, v, w) => [x + u, 0 - w, v],
+  );
 }

@@ -10,6 +10,7 @@ export const geometryErrorCodes = [
   'RAIL_DOES_NOT_FIT',
   'POLYGON_INVALID',
   'WORK_LIMIT',
+  'KEY_TOO_SMALL',
 ] as const;
 export type GeometryErrorCode = (typeof geometryErrorCodes)[number];
 

@@ -1,4 +1,4 @@
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from './solid/jscad-types';
 import type { KeySectionParams } from './section/key-section';
 import { keptFeature } from './min-feature';
 import { keySection } from './section/key-section';

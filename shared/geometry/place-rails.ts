@@ -2,6 +2,7 @@ import type { Face } from '../schemas/face';
 import { GeometryError } from './geometry-error';
 import { faceBounds } from './layout/face-bounds';
 import { faceSpanAtX } from './layout/face-span-at-x';
+import { validatePolygon } from './layout/validate-polygon';
 import { formatMm } from './layout/format-mm';
 import { MIN_FEATURE_MM } from './min-feature';
 import { CUTTER_OVERSHOOT_MM } from './pocket-cutter';
@@ -47,7 +48,8 @@ export interface RailPlacement {
  * @param params - see {@link PlaceRailsParams}
  * @returns one placement per rail, in ascending x
  * @throws GeometryError RAIL_DOES_NOT_FIT with the numbers when slots overlap or leave walls thinner than
- *   `margin`, reach past the face, or the face is too short for the rail
+ *   `margin`, reach past the face, or the face is too short for the rail; POLYGON_INVALID (or WORK_LIMIT)
+ *   for a polygon face that crosses itself
  * @example
  * placeRails({ face: { shape: 'rect', width: 90, height: 60 }, count: 3, rootWidth: 10, height: 6,
  *   flankAngle: radians(Math.atan(1 / 6)), clearance: 0.15, margin: 2, endStop: false, endStopWall: 3,
@@ -55,8 +57,14 @@ export interface RailPlacement {
  */
 export function placeRails(params: PlaceRailsParams): RailPlacement[] {
   const { face, count, margin } = params;
+  if (face.shape === 'polygon') validatePolygon(face.points);
   const railHalf = Math.max(...dovetailSection(params).map(([u]) => u));
-  const slotRing = offsetConvexPolygon(dovetailSection(params), [CUTTER_OVERSHOOT_MM, params.clearance, params.clearance, params.clearance]);
+  const slotRing = offsetConvexPolygon(dovetailSection(params), [
+    CUTTER_OVERSHOOT_MM,
+    params.clearance,
+    params.clearance,
+    params.clearance,
+  ]);
   const slotHalf = Math.max(...slotRing.map(([u]) => u));
   const b = faceBounds(face);
   const pitch = params.pitch ?? (b.maxX - b.minX) / count;
@@ -90,7 +98,10 @@ function placeOne(params: PlaceRailsParams, x: number, railHalf: number, slotHal
   const room = end - rail.minY;
   const length = params.length ?? room;
   if (length > room + 1e-9 || length < 2 * params.chamfer + MIN_FEATURE_MM) {
-    const need = length > room ? `a ${formatMm(length)} mm rail` : `a rail longer than its two ${formatMm(params.chamfer)} mm chamfers`;
+    const need =
+      length > room
+        ? `a ${formatMm(length)} mm rail`
+        : `a rail longer than its two ${formatMm(params.chamfer)} mm chamfers`;
     throw new GeometryError(
       'RAIL_DOES_NOT_FIT',
       `the face has room for a dovetail rail ${formatMm(Math.max(0, room), 'down')} mm long at x = ${formatMm(x)} mm` +

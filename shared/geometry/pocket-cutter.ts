@@ -1,4 +1,4 @@
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from './solid/jscad-types';
 import { keptFeature } from './min-feature';
 import { offsetConvexPolygon } from './section/offset-convex-polygon';
 import { loftSolid } from './solid/loft-solid';

@@ -35,7 +35,10 @@ export interface KitFile {
  */
 export function buildKit(request: ResolvedKitRequest): { manifest: KitManifest; files: KitFile[] } {
   const { manifest, meshes } = planAndMesh(request);
-  const files: KitFile[] = manifest.parts.map((part, i) => ({ name: part.file, bytes: stlBytes(meshes[i]!, part.file, request.format) }));
+  const files: KitFile[] = manifest.parts.map((part, i) => ({
+    name: part.file,
+    bytes: stlBytes(meshes[i]!, part.file, request.format),
+  }));
   files.push({ name: 'README.txt', bytes: new TextEncoder().encode(kitReadme(manifest)) });
   return { manifest, files };
 }

@@ -17,14 +17,20 @@ const mm = (v: number) => `${Math.round(v * 1000) / 1000} mm`;
 export function keyWarnings(key: KeyOptions, keyScale: number, clearancePerSide: number): string[] {
   const warnings: string[] = [];
   if (keyScale < 0.8) {
-    warnings.push(`a ${mm(clearancePerSide)} clearance needs the ${mm(key.width)} key printed at ${pct(keyScale)}; below 80 % the key is much weaker than the pocket`);
+    warnings.push(
+      `a ${mm(clearancePerSide)} clearance needs the ${mm(key.width)} key printed at ${pct(keyScale)}; below 80 % the key is much weaker than the pocket`,
+    );
   }
   if (key.strategy === 'scale' && key.shape === 'rect' && key.length !== undefined) {
     const along = ((1 - keyScale) * key.length) / 2;
-    warnings.push(`a rect key scaled to ${pct(keyScale)} leaves ${mm(clearancePerSide)} per side across its ${mm(key.width)} width but ${mm(along)} per side along its ${mm(key.length)} length`);
+    warnings.push(
+      `a rect key scaled to ${pct(keyScale)} leaves ${mm(clearancePerSide)} per side across its ${mm(key.width)} width but ${mm(along)} per side along its ${mm(key.length)} length`,
+    );
   }
   if (key.shape === 'round' && key.flat <= 0) {
-    warnings.push('round keys without a flat rest on one narrow facet when printed lying down: add a brim, or ask for a flat (it also stops the key turning)');
+    warnings.push(
+      'round keys without a flat rest on one narrow facet when printed lying down: add a brim, or ask for a flat (it also stops the key turning)',
+    );
   }
   return warnings;
 }
@@ -47,6 +53,7 @@ export function keyPrintNotes(key: KeyOptions, count: number, keyScale: number):
       ? `key.stl is already scaled to ${pct(keyScale)}: print it at 100 % in the slicer, do not scale it again`
       : 'print key.stl at 100 % scale: the clearance is already in the pockets',
   ];
-  if (key.shape === 'round' && key.flat > 0) notes.push('round keys have a flat: print them resting on it, and line it up with the flat in each pocket');
+  if (key.shape === 'round' && key.flat > 0)
+    notes.push('round keys have a flat: print them resting on it, and line it up with the flat in each pocket');
   return notes;
 }

@@ -1,15 +1,19 @@
-import { clearanceForKeyScale, keyScaleForClearance, resolveClearance } from '../fit';
 import { keyOnBed } from '../geometry/key-on-bed';
 import { keyPin } from '../geometry/key-pin';
 import { placeKeys } from '../geometry/layout';
-import { pocketCutter } from '../geometry/pocket-cutter';
+import { pocketCutter, type PocketCutterParams } from '../geometry/pocket-cutter';
+import type { KeySectionParams } from '../geometry/section/key-section';
 import { keySection } from '../geometry/section/key-section';
 import { mergeSolids } from '../geometry/solid/merge-solids';
+import type { Vec2 } from '../geometry/units';
 import { keyLengthOf } from '../schemas/kit-key-options';
 import type { ResolvedKeyKitRequest } from '../schemas/kit-request';
 import { keyFootprint, keyLabel } from './key-footprint';
+import { keyKitFit } from './key-kit-fit';
 import { keyPrintNotes, keyWarnings } from './key-kit-notes';
 import type { KitPartPlan, KitPlan } from './kit-part-plan';
+
+const round = (mm: number) => Math.round(mm * 1000) / 1000;
 
 /**
  * Plans a key kit: the clearance (fit engine, or the key scale for strategy "scale"), the layout of the
@@ -18,7 +22,8 @@ import type { KitPartPlan, KitPlan } from './kit-part-plan';
  *
  * @param request - a resolved kit request with `joint: 'key'`
  * @returns the kit's files as solids plus its manifest numbers, see {@link KitPlan}
- * @throws GeometryError when the keys do not fit on the face (numbers in the message)
+ * @throws GeometryError when the keys do not fit on the face, or KEY_TOO_SMALL when strategy "scale" would
+ *   print the key below half size (numbers in the message)
  * @example
  * keyKitPlan(kitRequestSchema.parse({ joint: 'key', material: 'PLA', fit: 'snug',
  *   face: { shape: 'rect', width: 80, height: 60 }, key: { shape: 'square', width: 10, depth: 8, count: 8 } }))
@@ -26,39 +31,57 @@ import type { KitPartPlan, KitPlan } from './kit-part-plan';
  */
 export function keyKitPlan(request: ResolvedKeyKitRequest): KitPlan {
   const k = request.key;
-  const fit = resolveClearance({ process: request.process, material: request.material, fit: request.fit, calibrationOffset: request.calibrationOffset, clearance: request.clearance });
-  const scaled = k.strategy === 'scale';
-  const keyScale = !scaled ? 1 : (k.scale ?? keyScaleForClearance(k.width, fit.clearancePerSide));
-  const clearancePerSide = scaled ? clearanceForKeyScale(k.width, keyScale) : fit.clearancePerSide;
-  const pocketGrowth = scaled ? 0 : clearancePerSide;
-  const sectionParams = { shape: k.shape, width: k.width, length: k.length, flat: k.flat, chordTolerance: request.chordTolerance };
+  const fit = keyKitFit(request);
+  const sectionParams: KeySectionParams = { ...k, chordTolerance: request.chordTolerance };
   const section = keySection(sectionParams);
   const keyLength = keyLengthOf(k);
-  const pocketDepth = keyLength / 2 + k.bottomGap;
-  const footprint = keyFootprint(section, pocketGrowth + k.entryChamfer, k.shape === 'round');
-  const positions = placeKeys({ face: request.face, footprint, margin: k.margin, count: k.count, keyLabel: keyLabel(k) });
-  const key = keyOnBed(keyPin({ ...sectionParams, keyLength, chamfer: k.chamfer, scale: keyScale }));
-  const cutter = (half: 'A' | 'B') =>
-    mergeSolids(positions.map((position) => pocketCutter({ section, clearance: pocketGrowth, depth: pocketDepth, entryChamfer: k.entryChamfer, half, position })));
+  const pocket = {
+    section,
+    clearance: fit.pocketGrowth,
+    depth: keyLength / 2 + k.bottomGap,
+    entryChamfer: k.entryChamfer,
+  };
+  const footprint = keyFootprint(section, fit.pocketGrowth + k.entryChamfer, k.shape === 'round');
+  const positions = placeKeys({
+    face: request.face,
+    footprint,
+    margin: k.margin,
+    count: k.count,
+    keyLabel: keyLabel(k),
+  });
+  const key = keyOnBed(keyPin({ ...sectionParams, keyLength, chamfer: k.chamfer, scale: fit.keyScale }));
   const n = positions.length;
-  const parts: KitPartPlan[] = [
-    { file: 'key.stl', role: 'key', quantity: n, solid: key, note: `print ${n} of this key lying down as it is in the file; each key goes half into a pocket of half A and half into the matching pocket of half B` },
-    { file: 'pocket-cutter-A.stl', role: 'pocket-cutter', half: 'A', quantity: 1, solid: cutter('A'), positions, note: `subtract from half A (below the cut face): ${n} pockets ${round(pocketDepth)} mm deep` },
-    { file: 'pocket-cutter-B.stl', role: 'pocket-cutter', half: 'B', quantity: 1, solid: cutter('B'), positions, note: `subtract from half B (above the cut face): ${n} pockets ${round(pocketDepth)} mm deep` },
-  ];
-  const derived: Record<string, number> = { keyCount: n, keyLength: round(keyLength * keyScale), pocketDepth: round(pocketDepth), pocketGrowthPerSide: pocketGrowth };
   return {
-    parts,
-    clearancePerSide,
-    ...(scaled ? { keyScale } : {}),
+    parts: [keyPart(key, n), cutterPart('A', pocket, positions), cutterPart('B', pocket, positions)],
+    clearancePerSide: fit.clearancePerSide,
+    ...(k.strategy === 'scale' ? { keyScale: fit.keyScale } : {}),
     derivation: fit.derivation,
     steps: fit.steps,
-    warnings: [...fit.warnings, ...keyWarnings(k, keyScale, clearancePerSide)],
-    derived,
-    printNotes: keyPrintNotes(k, n, keyScale),
+    warnings: [...fit.warnings, ...keyWarnings(k, fit.keyScale, fit.clearancePerSide)],
+    derived: {
+      keyCount: n,
+      keyLength: round(keyLength * fit.keyScale),
+      pocketDepth: round(pocket.depth),
+      pocketGrowthPerSide: fit.pocketGrowth,
+    },
+    printNotes: keyPrintNotes(k, n, fit.keyScale),
   };
 }
 
-function round(mm: number): number {
-  return Math.round(mm * 1000) / 1000;
+function keyPart(solid: KitPartPlan['solid'], n: number): KitPartPlan {
+  const note = `print ${n} of this key lying down as it is in the file; each key goes half into a pocket of half A and half into the matching pocket of half B`;
+  return { file: 'key.stl', role: 'key', quantity: n, solid, note };
+}
+
+/** One half's cutter file: every pocket in place, merged without booleans (the layout keeps them apart). */
+function cutterPart(
+  half: 'A' | 'B',
+  pocket: Omit<PocketCutterParams, 'half' | 'position'>,
+  positions: Vec2[],
+): KitPartPlan {
+  const solid = mergeSolids(positions.map((position) => pocketCutter({ ...pocket, half, position })));
+  const where = half === 'A' ? 'below' : 'above';
+  const note = `subtract from half ${half} (${where} the cut face): ${positions.length} pockets ${round(pocket.depth)} mm deep`;
+  const copy = positions.map(([x, y]) => [x, y] as [number, number]);
+  return { file: `pocket-cutter-${half}.stl`, role: 'pocket-cutter', half, quantity: 1, solid, positions: copy, note };
 }

@@ -21,6 +21,7 @@ export const kitPartSchema = z.object({
   /** What the file is and what to do with it, in plain words. */
   note: z.string(),
 });
+/** One file of a kit as the manifest lists it; see {@link kitPartSchema}. */
 export type KitPart = z.infer<typeof kitPartSchema>;
 
 /**
@@ -52,4 +53,5 @@ export const kitManifestSchema = z.object({
   derived: z.record(z.string(), z.number()),
   printNotes: z.array(z.string()),
 });
+/** A kit's manifest.json; see {@link kitManifestSchema}. */
 export type KitManifest = z.infer<typeof kitManifestSchema>;

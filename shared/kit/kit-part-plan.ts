@@ -1,4 +1,4 @@
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from '../geometry/solid/jscad-types';
 import type { KitPart } from './kit-manifest';
 
 /**

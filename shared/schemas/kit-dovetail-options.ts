@@ -5,8 +5,9 @@ import { countField, mmField, num, tooFine } from './kit-number-fields';
 export const MAX_RAIL_COUNT = 16;
 /** Default dovetail slope 1:6, the softwood norm (REFERENCES §6: Popular Woodworking, Lee Valley). */
 export const DEFAULT_DOVETAIL_SLOPE = 6;
-/** Steepest slope accepted, 1:2 (26.565°), and shallowest, 1:20 (2.862°). */
+/** Steepest slope accepted: 1:2 (26.565° from the vertical). */
 export const MIN_DOVETAIL_SLOPE = 2;
+/** Shallowest slope accepted: 1:20 (2.862° from the vertical). */
 export const MAX_DOVETAIL_SLOPE = 20;
 
 const degrees = (slope: number) => (Math.atan(1 / slope) * 180) / Math.PI;
@@ -33,18 +34,38 @@ function checkDovetail(d: DovetailFields, ctx: z.RefinementCtx): void {
   tooFine(ctx, ['chamfer'], 'dovetail chamfer', d.chamfer);
   // Both may be sent (a resolved request carries both); they must then describe the same slope.
   if (d.slope !== undefined && d.angleDeg !== undefined && Math.abs(degrees(d.slope) - d.angleDeg) > 0.01) {
-    ctx.addIssue({ code: 'custom', path: ['angleDeg'], message: `dovetail slope 1:${num(d.slope)} is ${num(degrees(d.slope))}°, not ${num(d.angleDeg)}°: give the slope as a ratio ("slope") or as an angle ("angleDeg")` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['angleDeg'],
+      message: `dovetail slope 1:${num(d.slope)} is ${num(degrees(d.slope))}°, not ${num(d.angleDeg)}°: give the slope as a ratio ("slope") or as an angle ("angleDeg")`,
+    });
   }
   const c = d.chamfer;
   if (c !== undefined && d.rootWidth >= 2 && c > 0.4 * d.rootWidth) {
-    ctx.addIssue({ code: 'custom', path: ['chamfer'], message: `dovetail chamfer ${num(c)} mm is more than 40 % of the ${num(d.rootWidth)} mm root width (${num(0.4 * d.rootWidth)} mm)` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['chamfer'],
+      message: `dovetail chamfer ${num(c)} mm is more than 40 % of the ${num(d.rootWidth)} mm root width (${num(0.4 * d.rootWidth)} mm)`,
+    });
   } else if (c !== undefined && d.height >= 1 && c > d.height / 2) {
-    ctx.addIssue({ code: 'custom', path: ['chamfer'], message: `dovetail chamfer ${num(c)} mm is more than half the ${num(d.height)} mm rail height (${num(d.height / 2)} mm)` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['chamfer'],
+      message: `dovetail chamfer ${num(c)} mm is more than half the ${num(d.height)} mm rail height (${num(d.height / 2)} mm)`,
+    });
   } else if (c !== undefined && d.length !== undefined && d.length >= 4 && 4 * c >= d.length) {
-    ctx.addIssue({ code: 'custom', path: ['chamfer'], message: `dovetail chamfer ${num(c)} mm is a quarter or more of the ${num(d.length)} mm rail length; keep it below ${num(d.length / 4)} mm` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['chamfer'],
+      message: `dovetail chamfer ${num(c)} mm is a quarter or more of the ${num(d.length)} mm rail length; keep it below ${num(d.length / 4)} mm`,
+    });
   }
   if (d.pitch !== undefined && d.count === 1) {
-    ctx.addIssue({ code: 'custom', path: ['pitch'], message: 'dovetail pitch is the spacing between rails; it needs a count of 2 or more' });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['pitch'],
+      message: 'dovetail pitch is the spacing between rails; it needs a count of 2 or more',
+    });
   }
 }
 
@@ -64,13 +85,23 @@ function checkDovetail(d: DovetailFields, ctx: z.RefinementCtx): void {
  */
 export const dovetailOptionsSchema = z
   .strictObject(dovetailFields, {
-    error: (iss) => (iss.input === undefined ? 'a dovetail joint needs a "dovetail" object with rootWidth and height' : '"dovetail" must be an object'),
+    error: (iss) => {
+      if (iss.code === 'unrecognized_keys')
+        return `unknown dovetail option${iss.keys.length > 1 ? 's' : ''} ${iss.keys.map((k) => `"${k}"`).join(', ')}: check the spelling`;
+      return iss.input === undefined
+        ? 'a dovetail joint needs a "dovetail" object with rootWidth and height'
+        : '"dovetail" must be an object';
+    },
   })
   .superRefine(checkDovetail)
   .transform((d) => {
     const fromAngle = (deg: number) => 1 / Math.tan((deg * Math.PI) / 180);
     // Clamped: the angle bounds are rounded outward to 0.01°, the slope must still parse again.
-    const slope = d.slope ?? (d.angleDeg !== undefined ? Math.min(Math.max(fromAngle(d.angleDeg), MIN_DOVETAIL_SLOPE), MAX_DOVETAIL_SLOPE) : DEFAULT_DOVETAIL_SLOPE);
+    const slope =
+      d.slope ??
+      (d.angleDeg !== undefined
+        ? Math.min(Math.max(fromAngle(d.angleDeg), MIN_DOVETAIL_SLOPE), MAX_DOVETAIL_SLOPE)
+        : DEFAULT_DOVETAIL_SLOPE);
     const chamfer = d.chamfer ?? Math.min(0.5, Math.floor(10 * d.rootWidth) / 100, Math.floor(25 * d.height) / 100);
     return { ...d, slope, angleDeg: d.angleDeg ?? degrees(slope), chamfer };
   });

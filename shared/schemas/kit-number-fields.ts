@@ -35,15 +35,20 @@ export interface NumberBounds {
 export function mmField(what: string, bounds: NumberBounds, unit = 'mm') {
   const u = unit === '' || unit === '°' ? unit : ` ${unit}`;
   let field = z.number({
-    error: (iss) => (iss.input === undefined ? `${what} is required` : `${what} must be a number${unit === 'mm' ? ' in mm' : ''}`),
+    error: (iss) =>
+      iss.input === undefined ? `${what} is required` : `${what} must be a number${unit === 'mm' ? ' in mm' : ''}`,
   });
   if (bounds.above !== undefined) {
     const above = bounds.above;
-    field = field.gt(above, { error: (iss) => `${what} must be more than ${num(above)}${u}; it is ${String(iss.input)}${u}` });
+    field = field.gt(above, {
+      error: (iss) => `${what} must be more than ${num(above)}${u}; it is ${String(iss.input)}${u}`,
+    });
   }
   if (bounds.min !== undefined) {
     const min = bounds.min;
-    field = field.min(min, { error: (iss) => `${what} must be at least ${num(min)}${u}; it is ${String(iss.input)}${u}` });
+    field = field.min(min, {
+      error: (iss) => `${what} must be at least ${num(min)}${u}; it is ${String(iss.input)}${u}`,
+    });
   }
   return field.max(bounds.max, {
     error: (iss) => `${what} must be at most ${num(bounds.max)}${u}; it is ${String(iss.input)}${u}`,
@@ -80,6 +85,23 @@ export function countField(what: string, max: number) {
  */
 export function tooFine(ctx: z.RefinementCtx, path: string[], what: string, value: number | undefined): void {
   if (value !== undefined && value > 0 && value < MIN_FEATURE_MM) {
-    ctx.addIssue({ code: 'custom', path, message: `${what} ${value} mm is finer than a kit file keeps (${MIN_FEATURE_MM} mm): use 0 for none or at least ${MIN_FEATURE_MM} mm` });
+    ctx.addIssue({
+      code: 'custom',
+      path,
+      message: `${what} ${value} mm is finer than a kit file keeps (${MIN_FEATURE_MM} mm): use 0 for none or at least ${MIN_FEATURE_MM} mm`,
+    });
   }
+}
+
+/**
+ * Adds a custom issue at `field` (a path inside the object being refined) with a plain message.
+ *
+ * @param ctx - the refinement context
+ * @param field - the field's name
+ * @param message - the message, with the numbers
+ * @example
+ * addIssue(ctx, 'length', 'a rect key needs "length": its side along y in mm');
+ */
+export function addIssue(ctx: z.RefinementCtx, field: string, message: string): void {
+  ctx.addIssue({ code: 'custom', path: [field], message });
 }

@@ -1,21 +1,17 @@
 import jscad from '@jscad/modeling';
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from '../solid/jscad-types';
+import { snapPolygons } from './snap-polygons';
 import type { TriangleMesh } from './triangle-mesh';
 
 const { geom3 } = jscad.geometries;
-const { measureEpsilon } = jscad.measurements;
-// The package's .d.ts re-exports a default that snap.d.ts never declares: type the function by hand.
-const snap = jscad.modifiers.snap as unknown as (geometry: Geom3) => Geom3;
-
-type V = readonly number[];
 
 /**
  * Converts a JSCAD solid to a {@link TriangleMesh} with the same triangles, in the same order and
  * orientation, as @jscad/stl-serializer 2.1 writes for it, so the fast STL writers agree with the reference
  * writer. The serializer first runs `generalize({ snap: true, triangulate: true })`; this does the same:
  *
- * 1. snap every corner to JSCAD's grid (1e-5 × the mean bounding-box side) with JSCAD's own `snap`,
- *    which also drops repeated corners and zero-area faces;
+ * 1. snap every corner to JSCAD's grid (1e-5 × the mean bounding-box side), drop repeated corners and
+ *    zero-area faces ({@link snapPolygons});
  * 2. triangulate: a triangle stays, a quad splits into (0, 1, 2) and (0, 2, 3), a larger convex polygon
  *    becomes a fan around its snapped mean corner;
  * 3. normal = normalize((b − a) × (c − a)) in double precision, as `poly3.plane` computes it for a triangle.
@@ -29,73 +25,65 @@ type V = readonly number[];
  * geom3ToMesh(keyPin({ shape: 'square', width: 10, keyLength: 16 })).positions.length; // 12 triangles × 9
  */
 export function geom3ToMesh(solid: Geom3): TriangleMesh {
-  const epsilon = measureEpsilon(solid);
-  const polygons = geom3.toPolygons(snap(solid));
+  const { coords, starts, sizes, epsilon } = snapPolygons(geom3.toPolygons(solid));
   let count = 0;
-  for (const p of polygons) count += p.vertices.length === 3 ? 1 : p.vertices.length === 4 ? 2 : p.vertices.length;
-  const positions = new Float32Array(count * 9);
-  const normals = new Float32Array(count * 3);
+  for (const n of sizes) count += n === 0 ? 0 : n === 3 ? 1 : n === 4 ? 2 : n;
+  const mesh: TriangleMesh = { positions: new Float32Array(count * 9), normals: new Float32Array(count * 3) };
+  const mid = new Float64Array(3);
   let t = 0;
-  const emit = (a: V, b: V, c: V): void => {
-    writeTriangle(positions, normals, t++, a, b, c);
-  };
-  for (const { vertices: vs } of polygons) {
-    const n = vs.length;
-    if (n === 3) emit(vs[0]!, vs[1]!, vs[2]!);
+  for (let i = 0; i < sizes.length; i++) {
+    const n = sizes[i]!;
+    const s = starts[i]!;
+    if (n === 3) writeTriangle(mesh, t++, coords, s, coords, s + 1, s + 2);
     else if (n === 4) {
-      emit(vs[0]!, vs[1]!, vs[2]!);
-      emit(vs[0]!, vs[2]!, vs[3]!);
-    } else {
-      const mid = snappedMean(vs, epsilon);
-      for (let i = 0; i < n; i++) emit(mid, vs[i]!, vs[(i + 1) % n]!);
+      writeTriangle(mesh, t++, coords, s, coords, s + 1, s + 2);
+      writeTriangle(mesh, t++, coords, s, coords, s + 2, s + 3);
+    } else if (n > 4) {
+      snappedMean(coords, s, n, epsilon, mid);
+      for (let c = 0; c < n; c++) writeTriangle(mesh, t++, mid, 0, coords, s + c, s + ((c + 1) % n));
     }
   }
-  return { positions, normals };
+  return mesh;
 }
 
 /** The polygon's mean corner, summed in order and snapped exactly as JSCAD's triangulation does. */
-function snappedMean(vs: readonly V[], epsilon: number): V {
-  let x = 0;
-  let y = 0;
-  let z = 0;
-  for (const v of vs) {
-    x += v[0]!;
-    y += v[1]!;
-    z += v[2]!;
+function snappedMean(coords: Float64Array, start: number, n: number, epsilon: number, out: Float64Array): void {
+  for (let k = 0; k < 3; k++) {
+    let sum = 0;
+    for (let c = 0; c < n; c++) sum += coords[3 * (start + c) + k]!;
+    out[k] = Math.round(sum / n / epsilon) * epsilon + 0;
   }
-  const n = vs.length;
-  const s = (value: number) => Math.round(value / n / epsilon) * epsilon + 0;
-  return [s(x), s(y), s(z)];
 }
 
-function writeTriangle(positions: Float32Array, normals: Float32Array, t: number, a: V, b: V, c: V): void {
-  const [ax, ay, az] = a as [number, number, number];
-  const [bx, by, bz] = b as [number, number, number];
-  const [cx, cy, cz] = c as [number, number, number];
-  const ux = bx - ax;
-  const uy = by - ay;
-  const uz = bz - az;
-  const vx = cx - ax;
-  const vy = cy - ay;
-  const vz = cz - az;
+/** Triangle t from corner `a` of `first` and corners `b`, `c` of `coords` (indices in corners). */
+function writeTriangle(
+  mesh: TriangleMesh,
+  t: number,
+  first: Float64Array,
+  a: number,
+  coords: Float64Array,
+  b: number,
+  c: number,
+): void {
+  const p = mesh.positions;
+  const o = 9 * t;
+  // Corners in float64 for the normal, then stored as float32; plain locals keep this loop allocation-free.
+  const ax = (p[o] = first[3 * a]!);
+  const ay = (p[o + 1] = first[3 * a + 1]!);
+  const az = (p[o + 2] = first[3 * a + 2]!);
+  const ux = (p[o + 3] = coords[3 * b]!) - ax;
+  const uy = (p[o + 4] = coords[3 * b + 1]!) - ay;
+  const uz = (p[o + 5] = coords[3 * b + 2]!) - az;
+  const vx = (p[o + 6] = coords[3 * c]!) - ax;
+  const vy = (p[o + 7] = coords[3 * c + 1]!) - ay;
+  const vz = (p[o + 8] = coords[3 * c + 2]!) - az;
   const nx = uy * vz - uz * vy;
   const ny = uz * vx - ux * vz;
   const nz = ux * vy - uy * vx;
   // Same operation order as JSCAD's vec3.normalize: multiply by the reciprocal length.
   let len = nx * nx + ny * ny + nz * nz;
   if (len > 0) len = 1 / Math.sqrt(len);
-  const o = t * 3;
-  normals[o] = nx * len;
-  normals[o + 1] = ny * len;
-  normals[o + 2] = nz * len;
-  const p = t * 9;
-  positions[p] = ax;
-  positions[p + 1] = ay;
-  positions[p + 2] = az;
-  positions[p + 3] = bx;
-  positions[p + 4] = by;
-  positions[p + 5] = bz;
-  positions[p + 6] = cx;
-  positions[p + 7] = cy;
-  positions[p + 8] = cz;
+  mesh.normals[3 * t] = nx * len;
+  mesh.normals[3 * t + 1] = ny * len;
+  mesh.normals[3 * t + 2] = nz * len;
 }

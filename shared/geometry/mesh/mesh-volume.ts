@@ -13,9 +13,15 @@ export function meshVolume(mesh: TriangleMesh): number {
   const p = mesh.positions;
   let sum = 0;
   for (let i = 0; i < p.length; i += 9) {
-    const ax = p[i]!, ay = p[i + 1]!, az = p[i + 2]!;
-    const bx = p[i + 3]!, by = p[i + 4]!, bz = p[i + 5]!;
-    const cx = p[i + 6]!, cy = p[i + 7]!, cz = p[i + 8]!;
+    const ax = p[i]!,
+      ay = p[i + 1]!,
+      az = p[i + 2]!;
+    const bx = p[i + 3]!,
+      by = p[i + 4]!,
+      bz = p[i + 5]!;
+    const cx = p[i + 6]!,
+      cy = p[i + 7]!,
+      cz = p[i + 8]!;
     sum += ax * (by * cz - bz * cy) + ay * (bz * cx - bx * cz) + az * (bx * cy - by * cx);
   }
   return sum / 6;

@@ -26,5 +26,10 @@ export function dovetailSection(params: DovetailSectionParams): Vec2[] {
   const { rootWidth, height, flankAngle } = params;
   const root = rootWidth / 2;
   const top = root + height * Math.tan(flankAngle);
-  return [[-root, 0], [root, 0], [top, height], [-top, height]];
+  return [
+    [-root, 0],
+    [root, 0],
+    [top, height],
+    [-top, height],
+  ];
 }

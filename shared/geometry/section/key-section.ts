@@ -46,7 +46,12 @@ export function keySection(params: KeySectionParams, inset = 0): Vec2[] {
   let section: Vec2[];
   if (shape === 'square' || shape === 'rect') {
     const hy = shape === 'rect' ? (params.length ?? width) / 2 : half;
-    section = [[-half, -hy], [half, -hy], [half, hy], [-half, hy]];
+    section = [
+      [-half, -hy],
+      [half, -hy],
+      [half, hy],
+      [-half, hy],
+    ];
   } else if (shape === 'hex') {
     // Circumradius of a hexagon whose flat-to-flat distance is `width`; corners at 30° + k·60°.
     const r = width / Math.sqrt(3);

@@ -1,5 +1,5 @@
 import jscad from '@jscad/modeling';
-import type { Geom3, Poly3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3, Poly3 } from './jscad-types';
 import type { Vec2, Vec3 } from '../units';
 
 const { geom3, poly3 } = jscad.geometries;

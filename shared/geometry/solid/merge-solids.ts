@@ -1,5 +1,5 @@
 import jscad from '@jscad/modeling';
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from './jscad-types';
 
 const { geom3 } = jscad.geometries;
 

@@ -47,5 +47,7 @@ export function near(
     footprint.kind === 'circle'
       ? Math.hypot(dx, dy) <= footprint.diameter / 2 + slack
       : Math.abs(dx) <= footprint.width / 2 + slack && Math.abs(dy) <= footprint.height / 2 + slack;
-  return points.map(([x, y]) => [x - centre[0], y - centre[1]] as [number, number]).filter(([dx, dy]) => inside(dx, dy));
+  return points
+    .map(([x, y]) => [x - centre[0], y - centre[1]] as [number, number])
+    .filter(([dx, dy]) => inside(dx, dy));
 }

@@ -1,5 +1,5 @@
 import { serialize } from '@jscad/stl-serializer';
-import type { Geom3 } from '@jscad/modeling/src/geometries/types';
+import type { Geom3 } from '../../../shared/geometry/solid/jscad-types';
 import { STLLoader } from 'three/examples/jsm/loaders/STLLoader.js';
 
 /** The reference writer's binary STL for a solid (@jscad/stl-serializer 2.1.23), as one byte array. */

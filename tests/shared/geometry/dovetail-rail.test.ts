@@ -7,7 +7,17 @@ import { expectRelative } from '../../helpers/mesh/expect-relative';
 import { sliceMesh } from '../../helpers/mesh/slice-mesh';
 
 const rail = (slope: number, chamfer = 0) =>
-  geom3ToMesh(dovetailRail({ rootWidth: 10, height: 6, flankAngle: radians(Math.atan(1 / slope)), x: 5, y0: -20, y1: 30, chamfer }));
+  geom3ToMesh(
+    dovetailRail({
+      rootWidth: 10,
+      height: 6,
+      flankAngle: radians(Math.atan(1 / slope)),
+      x: 5,
+      y0: -20,
+      y1: 30,
+      chamfer,
+    }),
+  );
 
 /**
  * Flank angle from the vertical, in degrees, measured on a slice across a tall, short rail at y = 0. Tall
@@ -16,7 +26,9 @@ const rail = (slope: number, chamfer = 0) =>
  */
 function flankAngleDeg(slope: number): number {
   const h = 40;
-  const mesh = geom3ToMesh(dovetailRail({ rootWidth: 10, height: h, flankAngle: radians(Math.atan(1 / slope)), x: 0, y0: -2, y1: 2 }));
+  const mesh = geom3ToMesh(
+    dovetailRail({ rootWidth: 10, height: h, flankAngle: radians(Math.atan(1 / slope)), x: 0, y0: -2, y1: 2 }),
+  );
   const pts = sliceMesh(mesh, 1, 0); // [x, z]
   const bottom = Math.max(...pts.filter(([, z]) => Math.abs(z) < 1e-3).map(([x]) => x));
   const top = Math.max(...pts.filter(([, z]) => Math.abs(z - h) < 1e-3).map(([x]) => x));

@@ -16,7 +16,11 @@ describe('dovetailSlotCutter', () => {
     const slotMesh = geom3ToMesh(dovetailSlotCutter({ ...section, clearance: c, x: 0, y0: -31, y1: 31 }));
     expect(edgeCheck(slotMesh)).toMatchObject({ unmatched: 0, repeated: 0, degenerate: 0 });
     const slotSlice = sliceMesh(slotMesh, 1, 0);
-    for (const d of [[Math.cos(theta), -Math.sin(theta)], [-Math.cos(theta), -Math.sin(theta)], [0, 1]] as const) {
+    for (const d of [
+      [Math.cos(theta), -Math.sin(theta)],
+      [-Math.cos(theta), -Math.sin(theta)],
+      [0, 1],
+    ] as const) {
       expect(support(slotSlice, d) - support(railSlice, d)).toBeCloseTo(c, 3);
     }
   });

@@ -23,7 +23,10 @@ describe('keyPin', () => {
   it('uses the prismatoid formula at the ends when a rect key is chamfered (derived)', () => {
     const [w, l, L, c] = [10, 6, 12, 0.5];
     const end = (c / 6) * (w * l + 4 * (w - c) * (l - c) + (w - 2 * c) * (l - 2 * c));
-    expect(volumeOf({ shape: 'rect', width: w, length: l, keyLength: L, chamfer: c })).toBeCloseTo(w * l * (L - 2 * c) + 2 * end, 1);
+    expect(volumeOf({ shape: 'rect', width: w, length: l, keyLength: L, chamfer: c })).toBeCloseTo(
+      w * l * (L - 2 * c) + 2 * end,
+      1,
+    );
   });
 
   it('matches the n-gon prism with similar chamfer frustums when the key is round (derived)', () => {
@@ -33,7 +36,10 @@ describe('keyPin', () => {
     const area = (n / 2) * r * r * Math.sin((2 * Math.PI) / n);
     const c = 0.4;
     const inset = area * ((a - c) / a) ** 2;
-    expect(volumeOf({ shape: 'round', width: 8, keyLength: 15.6, chamfer: c })).toBeCloseTo(area * (15.6 - 2 * c) + 2 * frustum(area, inset, c), 1);
+    expect(volumeOf({ shape: 'round', width: 8, keyLength: 15.6, chamfer: c })).toBeCloseTo(
+      area * (15.6 - 2 * c) + 2 * frustum(area, inset, c),
+      1,
+    );
     // And within the chord tolerance of the true cylinder (π r² L): the polygon is inscribed.
     expect(volumeOf({ shape: 'round', width: 8, keyLength: 10 })).toBeGreaterThan(Math.PI * (r - 0.02) ** 2 * 10);
   });
@@ -52,6 +58,9 @@ describe('keyPin', () => {
 
   it('is a uniformly scaled copy when a scale below 1 is given', () => {
     const full = volumeOf({ shape: 'square', width: 10, keyLength: 15.6, chamfer: 0.4 });
-    expect(volumeOf({ shape: 'square', width: 10, keyLength: 15.6, chamfer: 0.4, scale: 0.99 })).toBeCloseTo(full * 0.99 ** 3, 1);
+    expect(volumeOf({ shape: 'square', width: 10, keyLength: 15.6, chamfer: 0.4, scale: 0.99 })).toBeCloseTo(
+      full * 0.99 ** 3,
+      1,
+    );
   });
 });

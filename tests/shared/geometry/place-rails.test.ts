@@ -50,16 +50,22 @@ describe('placeRails', () => {
   it('throws RAIL_DOES_NOT_FIT with the numbers when the pitch leaves walls thinner than the margin', () => {
     const error = errorOf(() => placeRails({ ...base, pitch: 13 }));
     expect(error.code).toBe('RAIL_DOES_NOT_FIT');
-    expect(error.message).toMatch(/3 dovetail slots 12\.\d+ mm wide at 13 mm pitch leave 0\.\d+ mm of wall between them; at least 2 mm is needed/);
+    expect(error.message).toMatch(
+      /3 dovetail slots 12\.\d+ mm wide at 13 mm pitch leave 0\.\d+ mm of wall between them; at least 2 mm is needed/,
+    );
   });
 
   it('throws RAIL_DOES_NOT_FIT with the numbers when a slot would reach past the face edge', () => {
     const error = errorOf(() => placeRails({ ...base, pitch: 40 }));
-    expect(error.message).toMatch(/slot at x = -40 mm is 12\.\d+ mm wide and needs 2 mm of wall beside it, out to x = -48\.18 mm, which is past the face's edge/);
+    expect(error.message).toMatch(
+      /slot at x = -40 mm is 12\.\d+ mm wide and needs 2 mm of wall beside it, out to x = -48\.18 mm, which is past the face's edge/,
+    );
   });
 
   it('throws RAIL_DOES_NOT_FIT with the room available when the rail asked for is longer than the face', () => {
     const error = errorOf(() => placeRails({ ...base, count: 1, length: 70 }));
-    expect(error.message).toBe('the face has room for a dovetail rail 60 mm long at x = 0 mm; a 70 mm rail was asked for');
+    expect(error.message).toBe(
+      'the face has room for a dovetail rail 60 mm long at x = 0 mm; a 70 mm rail was asked for',
+    );
   });
 });

@@ -17,7 +17,9 @@ describe('pocketCutter', () => {
   });
 
   it('is half A mirrored in z = 0 when the half is B', () => {
-    const b = meshBounds(geom3ToMesh(pocketCutter({ section: square, clearance: 0.15, depth: 8, half: 'B', entryChamfer: 0.5 })));
+    const b = meshBounds(
+      geom3ToMesh(pocketCutter({ section: square, clearance: 0.15, depth: 8, half: 'B', entryChamfer: 0.5 })),
+    );
     expect(b.min[2]).toBeCloseTo(-1, 3);
     expect(b.max[2]).toBeCloseTo(8, 3);
   });
@@ -33,7 +35,11 @@ describe('pocketCutter', () => {
 
   it('moves every flat of a hex out by the clearance when measured on a slice at mid-depth', () => {
     const hex = keySection({ shape: 'hex', width: 8 });
-    const slice = sliceMesh(geom3ToMesh(pocketCutter({ section: hex, clearance: 0.2, depth: 8, half: 'A', position: [3, -2] })), 2, -4);
+    const slice = sliceMesh(
+      geom3ToMesh(pocketCutter({ section: hex, clearance: 0.2, depth: 8, half: 'A', position: [3, -2] })),
+      2,
+      -4,
+    );
     for (let k = 0; k < 6; k++) {
       const d = [Math.cos((k * Math.PI) / 3), Math.sin((k * Math.PI) / 3)] as const;
       const centre = 3 * d[0] - 2 * d[1];

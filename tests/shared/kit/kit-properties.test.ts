@@ -9,7 +9,11 @@ import { buildKit } from '../../../shared/kit/build-kit';
 import { dovetailKitPlan } from '../../../shared/kit/dovetail-kit-plan';
 import { keyFootprint } from '../../../shared/kit/key-footprint';
 import { keyKitPlan } from '../../../shared/kit/key-kit-plan';
-import { kitRequestSchema, type ResolvedKeyKitRequest, type ResolvedKitRequest } from '../../../shared/schemas/kit-request';
+import {
+  kitRequestSchema,
+  type ResolvedKeyKitRequest,
+  type ResolvedKitRequest,
+} from '../../../shared/schemas/kit-request';
 import { edgeCheck } from '../../helpers/mesh/edge-check';
 import { loadManifold, manifoldOf } from '../../helpers/mesh/manifold-check';
 import { near, sliceMesh, support } from '../../helpers/mesh/slice-mesh';
@@ -60,7 +64,7 @@ function snapGrid(mesh: TriangleMesh): number {
 let built = 0;
 let tried = 0;
 
-describe('buildKit (properties over the whole valid parameter space)', () => {
+describe('buildKit', () => {
   let wasm: Awaited<ReturnType<typeof loadManifold>>;
   beforeAll(async () => {
     wasm = await loadManifold();
@@ -97,7 +101,9 @@ describe('buildKit (properties over the whole valid parameter space)', () => {
         const a = tryBuild(kitRequestSchema.parse(body));
         const b = tryBuild(kitRequestSchema.parse(structuredClone(body)));
         expect(a?.files.map((f) => f.name)).toEqual(b?.files.map((f) => f.name));
-        a?.files.forEach((f, i) => expect(Buffer.compare(Buffer.from(f.bytes), Buffer.from(b!.files[i]!.bytes))).toBe(0));
+        a?.files.forEach((f, i) =>
+          expect(Buffer.compare(Buffer.from(f.bytes), Buffer.from(b!.files[i]!.bytes))).toBe(0),
+        );
       }),
       { numRuns: RUNS / 2 },
     );
@@ -127,7 +133,7 @@ describe('buildKit (properties over the whole valid parameter space)', () => {
   });
 });
 
-describe('keyKitPlan (pocket holds key, measured on the kit files)', () => {
+describe('keyKitPlan', () => {
   it('leaves the declared clearance per side between every pocket and the key at mid-depth when the kit builds', () => {
     fc.assert(
       fc.property(keyRequestArb, (body) => {
@@ -147,9 +153,13 @@ function checkPocketsHoldKey(request: ResolvedKeyKitRequest, kit: ReturnType<typ
   const keyMesh = meshOfFile(kit.files[0]!.bytes);
   const s = manifest.keyScale ?? 1;
   const growth = manifest.keyScale === undefined ? manifest.clearancePerSide : 0;
-  const section = keySection({ shape: k.shape, width: k.width, length: k.length, flat: k.flat, chordTolerance: request.chordTolerance }).map(
-    ([x, y]) => [x, y] as [number, number],
-  );
+  const section = keySection({
+    shape: k.shape,
+    width: k.width,
+    length: k.length,
+    flat: k.flat,
+    chordTolerance: request.chordTolerance,
+  }).map(([x, y]) => [x, y] as [number, number]);
   // The key lies on the bed, axis along x, lifted so its lowest point is at z = 0 (keyOnBed): bed (y, z)
   // is face (z + s · min x of the section, −y). Slice it across the middle of its length.
   const lift = s * Math.min(...section.map(([x]) => x));

@@ -11,11 +11,31 @@ const feature = (v: number) => (v < 0.02 ? 0 : v);
 const faceArb = fc.oneof(
   fc.record({ shape: fc.constant('rect' as const), width: mm(70, 160), height: mm(60, 140) }),
   fc.record({ shape: fc.constant('circle' as const), diameter: mm(80, 160) }),
-  mm(45, 80).map((r) => ({ shape: 'polygon' as const, points: Array.from({ length: 6 }, (_, i) => [r * Math.cos((i * Math.PI) / 3), r * Math.sin((i * Math.PI) / 3)] as [number, number]) })),
-  mm(70, 120).map((s) => ({ shape: 'polygon' as const, points: [[-s, -s], [s, -s], [s, 0], [0, 0], [0, s], [-s, s]] as Array<[number, number]> })),
+  mm(45, 80).map((r) => ({
+    shape: 'polygon' as const,
+    points: Array.from(
+      { length: 6 },
+      (_, i) => [r * Math.cos((i * Math.PI) / 3), r * Math.sin((i * Math.PI) / 3)] as [number, number],
+    ),
+  })),
+  mm(70, 120).map((s) => ({
+    shape: 'polygon' as const,
+    points: [
+      [-s, -s],
+      [s, -s],
+      [s, 0],
+      [0, 0],
+      [0, s],
+      [-s, s],
+    ] as Array<[number, number]>,
+  })),
 );
 
-const shared = { material: fc.constantFrom(...materials), fit: fc.constantFrom(...fits), chordTolerance: mm(0.005, 0.2) };
+const shared = {
+  material: fc.constantFrom(...materials),
+  fit: fc.constantFrom(...fits),
+  chordTolerance: mm(0.005, 0.2),
+};
 
 /**
  * Valid key kit requests across the whole parameter space the schema allows (sizes kept to what a few
@@ -44,7 +64,10 @@ export const keyRequestArb: fc.Arbitrary<KitRequest> = fc
     const narrowest = r.shape === 'rect' ? Math.min(r.width, r.length) : r.width - flat;
     const keyLength = 2 * r.depth - r.endGap;
     const pocketDepth = keyLength / 2 + (r.bottomGap ?? r.endGap / 2);
-    const chamfer = r.chamferFraction === undefined ? undefined : feature(r.chamferFraction * Math.min(0.4 * narrowest, keyLength / 4) * 0.99);
+    const chamfer =
+      r.chamferFraction === undefined
+        ? undefined
+        : feature(r.chamferFraction * Math.min(0.4 * narrowest, keyLength / 4) * 0.99);
     const strategy = r.strategy === 'clearance' ? 'clearance' : r.strategy;
     return {
       joint: 'key' as const,
@@ -97,6 +120,8 @@ export const dovetailRequestArb: fc.Arbitrary<KitRequest> = fc
       count: r.count,
       endStop: r.endStop,
       margin: r.margin,
-      ...(r.chamferFraction !== undefined ? { chamfer: feature(r.chamferFraction * Math.min(0.4 * r.rootWidth, r.height / 2) * 0.99) } : {}),
+      ...(r.chamferFraction !== undefined
+        ? { chamfer: feature(r.chamferFraction * Math.min(0.4 * r.rootWidth, r.height / 2) * 0.99) }
+        : {}),
     },
   }));

@@ -2,8 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { keySection } from '../../../../shared/geometry/section/key-section';
 import type { Vec2 } from '../../../../shared/geometry/units';
 
-const area = (p: readonly Vec2[]) => p.reduce((s, a, i) => s + (a[0] * p[(i + 1) % p.length]![1] - p[(i + 1) % p.length]![0] * a[1]) / 2, 0);
-const extent = (p: readonly Vec2[], axis: 0 | 1) => Math.max(...p.map((v) => v[axis])) - Math.min(...p.map((v) => v[axis]));
+const area = (p: readonly Vec2[]) =>
+  p.reduce((s, a, i) => s + (a[0] * p[(i + 1) % p.length]![1] - p[(i + 1) % p.length]![0] * a[1]) / 2, 0);
+const extent = (p: readonly Vec2[], axis: 0 | 1) =>
+  Math.max(...p.map((v) => v[axis])) - Math.min(...p.map((v) => v[axis]));
 
 describe('keySection', () => {
   it('makes a counter-clockwise square of side width when the shape is square', () => {
@@ -43,7 +45,11 @@ describe('keySection', () => {
   });
 
   it('insets every flat by the chamfer with the same corner count when an inset is asked for', () => {
-    for (const params of [{ shape: 'square', width: 10 }, { shape: 'hex', width: 8 }, { shape: 'round', width: 8, flat: 1 }] as const) {
+    for (const params of [
+      { shape: 'square', width: 10 },
+      { shape: 'hex', width: 8 },
+      { shape: 'round', width: 8, flat: 1 },
+    ] as const) {
       const full = keySection(params);
       const end = keySection(params, 0.5);
       expect(end).toHaveLength(full.length);

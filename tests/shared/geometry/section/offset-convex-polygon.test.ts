@@ -2,7 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { offsetConvexPolygon } from '../../../../shared/geometry/section/offset-convex-polygon';
 import type { Vec2 } from '../../../../shared/geometry/units';
 
-const square: Vec2[] = [[0, 0], [10, 0], [10, 10], [0, 10]];
+const square: Vec2[] = [
+  [0, 0],
+  [10, 0],
+  [10, 10],
+  [0, 10],
+];
 
 function edgeDistance(a: readonly Vec2[], b: readonly Vec2[], i: number): number {
   // Distance from edge i of `b` to the line of edge i of `a`, along a's outward normal.
@@ -21,7 +26,12 @@ describe('offsetConvexPolygon', () => {
   });
 
   it('moves every edge by exactly its own distance when the distances differ per edge', () => {
-    const trapezoid: Vec2[] = [[-5, 0], [5, 0], [6, 6], [-6, 6]];
+    const trapezoid: Vec2[] = [
+      [-5, 0],
+      [5, 0],
+      [6, 6],
+      [-6, 6],
+    ];
     const d = [1, 0.15, 0.3, 0.15];
     const out = offsetConvexPolygon(trapezoid, d);
     for (let i = 0; i < 4; i++) expect(edgeDistance(trapezoid, out, i)).toBeCloseTo(d[i]!, 12);
