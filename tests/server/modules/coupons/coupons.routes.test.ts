@@ -2,12 +2,7 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import JSZip from 'jszip';
 import { useTestApp } from '../../../helpers/test-app';
-
-function binary(res: NodeJS.ReadableStream, done: (e: Error | null, b?: Buffer) => void) {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
-}
+import { binaryBody } from '../../../helpers/binary-body';
 
 describe('POST /api/coupons', () => {
   const { app } = useTestApp();
@@ -24,7 +19,7 @@ describe('POST /api/coupons', () => {
         clearanceStep: 0.05,
       })
       .buffer(true)
-      .parse(binary);
+      .parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/zip');
     const zip = await JSZip.loadAsync(res.body as Buffer);

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import JSZip from 'jszip';
 import { useTestApp } from '../../../helpers/test-app';
+import { binaryBody } from '../../../helpers/binary-body';
 
 const keyKit = {
   joint: 'key',
@@ -19,21 +20,11 @@ const dovetailKit = {
   dovetail: { rootWidth: 12, height: 6, slope: 6, count: 3 },
 };
 
-// supertest collects a binary body only with an explicit parser.
-function binary(
-  res: NodeJS.ReadableStream & { setEncoding(e: string): void },
-  done: (e: Error | null, b?: Buffer) => void,
-) {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
-}
-
 describe('POST /api/kits', () => {
   const { app } = useTestApp();
 
   it('answers a zip of STLs, manifest.json and README.txt for a key kit, without sign-in', async () => {
-    const res = await request(app).post('/api/kits').send(keyKit).buffer(true).parse(binary);
+    const res = await request(app).post('/api/kits').send(keyKit).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/zip');
     expect(res.headers['content-disposition']).toMatch(
@@ -56,8 +47,8 @@ describe('POST /api/kits', () => {
   });
 
   it('gives byte-identical zips for the same request', async () => {
-    const a = await request(app).post('/api/kits').send(dovetailKit).buffer(true).parse(binary);
-    const b = await request(app).post('/api/kits').send(dovetailKit).buffer(true).parse(binary);
+    const a = await request(app).post('/api/kits').send(dovetailKit).buffer(true).parse(binaryBody);
+    const b = await request(app).post('/api/kits').send(dovetailKit).buffer(true).parse(binaryBody);
     expect(a.status).toBe(200);
     expect(Buffer.compare(a.body as Buffer, b.body as Buffer)).toBe(0);
     const zip = await JSZip.loadAsync(a.body as Buffer);
@@ -122,13 +113,14 @@ describe('POST /api/kits/summary', () => {
   it('answers the same manifest as the zip holds, as JSON', async () => {
     const summary = await request(app).post('/api/kits/summary').send(keyKit);
     expect(summary.status).toBe(200);
-    const zipped = await request(app).post('/api/kits').send(keyKit).buffer(true).parse(binary);
+    const zipped = await request(app).post('/api/kits').send(keyKit).buffer(true).parse(binaryBody);
     const zip = await JSZip.loadAsync(zipped.body as Buffer);
     const manifest = JSON.parse(await zip.file('manifest.json')!.async('string'));
     expect(summary.body).toEqual(manifest);
     expect(summary.body.clearancePerSide).toBeGreaterThan(0);
     expect(
-      summary.body.parts.find((p: { role: string }) => p.role === 'pocket-cutter' && p.half === 'A').positions,
+      summary.body.parts.find((p: { role: string; half?: string }) => p.role === 'pocket-cutter' && p.half === 'A')
+        .positions,
     ).toHaveLength(8);
   });
 });
