@@ -9,6 +9,7 @@ export default defineConfig({
     testTimeout: 30_000,
     hookTimeout: 60_000,
     globalSetup: ['tests/helpers/global-setup.ts'],
+    setupFiles: ['tests/helpers/fast-check-seed.ts'],
     pool: 'forks',
     fileParallelism: true,
   },

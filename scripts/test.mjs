@@ -4,10 +4,17 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { bootstrap } from './lib/bootstrap.mjs';
+import { buildClient } from './lib/build-client.mjs';
+import { ensureChromium, runIncludesBrowserTests } from './lib/chromium.mjs';
 import { databaseUrl, testDatabase } from './lib/db-settings.mjs';
 import { dataDir, root } from './lib/paths.mjs';
 
 const url = await bootstrap(testDatabase, { fresh: true });
+// Browser tests drive Debian's Chromium against the real server serving the built client (dist/).
+if (runIncludesBrowserTests(process.argv.slice(2))) {
+  ensureChromium();
+  buildClient();
+}
 const report = path.join(dataDir, 'vitest-report.json');
 rmSync(report, { force: true });
 

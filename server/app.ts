@@ -15,6 +15,11 @@ import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/teams/members.routes';
 import { teamsRoutes } from './modules/teams/teams.routes';
 import { outboxRoutes, type Outbox } from './modules/dev-outbox/outbox.routes';
+import { presetTransferRoutes } from './modules/presets/preset-transfer.routes';
+import { presetsRoutes } from './modules/presets/presets.routes';
+import { printerProfilesRoutes } from './modules/printer-profiles/printer-profiles.routes';
+import { materialsRoutes } from './modules/materials/materials.routes';
+import { kitHistoryRoutes } from './modules/kit-history/kit-history.routes';
 import { createSessions } from './auth/sessions';
 import { authenticate } from './http/authenticate';
 import { sameOrigin } from './http/same-origin';
@@ -75,6 +80,11 @@ export function createApp({
   api.use(invitationsRoutes(ctx));
   api.use(auditRoutes(ctx));
   // The team library; export/import first so "export" is never read as a preset id.
+  api.use(presetTransferRoutes(ctx));
+  api.use(presetsRoutes(ctx));
+  api.use(printerProfilesRoutes(ctx));
+  api.use(materialsRoutes(ctx));
+  api.use(kitHistoryRoutes(ctx));
   if (outbox) api.use(outboxRoutes(outbox));
   api.use(apiNotFound);
   app.use('/api', api);

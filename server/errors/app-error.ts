@@ -26,12 +26,15 @@ export class AppError extends Error {
   readonly code: ErrorCode;
   readonly status: number;
   readonly issues?: ErrorIssue[];
+  /** More fields for the error object, e.g. the current version beside a 409 of a stale save. */
+  readonly extra?: Record<string, unknown>;
 
-  constructor(code: ErrorCode, message: string, issues?: ErrorIssue[]) {
+  constructor(code: ErrorCode, message: string, issues?: ErrorIssue[], extra?: Record<string, unknown>) {
     super(message);
     this.name = 'AppError';
     this.code = code;
     this.status = errorStatus[code];
     this.issues = issues;
+    this.extra = extra;
   }
 }

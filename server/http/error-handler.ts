@@ -34,7 +34,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (appError.status >= 500) req.log?.error({ err }, 'request failed');
   if (appError.code === 'RATE_LIMITED' && !res.getHeader('Retry-After')) res.setHeader('Retry-After', '60');
   res.status(appError.status).json({
-    error: { code: appError.code, message: appError.message, ...(appError.issues ? { issues: appError.issues } : {}) },
+    error: {
+      ...appError.extra,
+      code: appError.code,
+      message: appError.message,
+      ...(appError.issues ? { issues: appError.issues } : {}),
+    },
   });
 };
 

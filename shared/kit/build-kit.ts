@@ -34,7 +34,7 @@ export interface KitFile {
  * files.map((f) => f.name); // ['key.stl', 'pocket-cutter-A.stl', 'pocket-cutter-B.stl', 'README.txt']
  */
 export function buildKit(request: ResolvedKitRequest): { manifest: KitManifest; files: KitFile[] } {
-  const { manifest, meshes } = planAndMesh(request);
+  const { manifest, meshes } = meshKit(request);
   const files: KitFile[] = manifest.parts.map((part, i) => ({
     name: part.file,
     bytes: stlBytes(meshes[i]!, part.file, request.format),
@@ -54,10 +54,21 @@ export function buildKit(request: ResolvedKitRequest): { manifest: KitManifest; 
  * summarizeKit(request).parts[0].quantity; // 8
  */
 export function summarizeKit(request: ResolvedKitRequest): KitManifest {
-  return planAndMesh(request).manifest;
+  return meshKit(request).manifest;
 }
 
-function planAndMesh(request: ResolvedKitRequest): { manifest: KitManifest; meshes: TriangleMesh[] } {
+/**
+ * Plans and meshes a kit without writing any file: the manifest plus one mesh per `manifest.parts` entry, in
+ * the same order. {@link buildKit}, {@link summarizeKit} and the design screen's preview all start here, so
+ * the preview shows exactly the numbers the download will carry.
+ *
+ * @param request - a resolved kit request
+ * @returns the manifest and the meshes
+ * @throws GeometryError like {@link buildKit}
+ * @example
+ * meshKit(request).meshes.length === meshKit(request).manifest.parts.length; // true
+ */
+export function meshKit(request: ResolvedKitRequest): { manifest: KitManifest; meshes: TriangleMesh[] } {
   const plan: KitPlan = request.joint === 'key' ? keyKitPlan(request) : dovetailKitPlan(request);
   const meshes = plan.parts.map((p) => geom3ToMesh(p.solid));
   const manifest: KitManifest = {

@@ -26,8 +26,8 @@ const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
  */
 export function dovetailKitPlan(request: ResolvedDovetailKitRequest): KitPlan {
   const d = request.dovetail;
-  const { process, material, fit: fitClass, calibrationOffset, clearance } = request;
-  const fit = resolveClearance({ process, material, fit: fitClass, calibrationOffset, clearance });
+  const { process, material, fit: fitClass, calibrationOffset, calibrationSource, clearance } = request;
+  const fit = resolveClearance({ process, material, fit: fitClass, calibrationOffset, calibrationSource, clearance });
   const c = fit.clearancePerSide;
   const section: DovetailSectionParams = {
     rootWidth: d.rootWidth,

@@ -1,5 +1,5 @@
 // Kit assembly: a resolved kit request in, STL files, README.txt and the manifest out. Pure.
-export { buildKit, summarizeKit, type KitFile } from './build-kit';
+export { buildKit, meshKit, summarizeKit, type KitFile } from './build-kit';
 export { kitManifestSchema, kitPartSchema, type KitManifest, type KitPart } from './kit-manifest';
 export { keyKitPlan } from './key-kit-plan';
 export { dovetailKitPlan } from './dovetail-kit-plan';

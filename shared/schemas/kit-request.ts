@@ -16,6 +16,13 @@ const sharedFields = {
   fit: fitClassSchema,
   clearance: mmField('clearance per side', { min: 0, max: 1 }).optional(),
   calibrationOffset: mmField('calibration offset', { min: -0.5, max: 0.5 }).optional(),
+  // Whose calibration the offset is, in words the fit derivation repeats (e.g. a printer profile's fit test).
+  calibrationSource: z
+    .string({ error: () => 'calibrationSource must be text' })
+    .trim()
+    .min(1)
+    .max(200, { error: () => 'calibrationSource must be at most 200 characters' })
+    .optional(),
   face: faceSchema,
   format: z.enum(['binary', 'ascii'], { error: () => 'format must be "binary" or "ascii"' }).default('binary'),
   chordTolerance: mmField('chord tolerance', { min: 0.001, max: 0.5 }).default(DEFAULT_CHORD_TOLERANCE_MM),
@@ -33,7 +40,7 @@ const dovetailKitSchema = z.object({ joint: z.literal('dovetail'), ...sharedFiel
  * - `process` defaults from the material (resin-… on "resin", filaments on "fdm"); a material that does not
  *   go with the process is rejected.
  * - `clearance` (mm per side, 0–1) replaces the fit engine's choice; `calibrationOffset` (mm, ±0.5) is the
- *   printer's fit-test correction.
+ *   printer's fit-test correction and `calibrationSource` (text, ≤ 200) says whose, for the derivation.
  * - `format`: STL "binary" (default) or "ascii". `chordTolerance`: largest chord deviation of round shapes,
  *   default 0.02 mm (0.001–0.5).
  *

@@ -15,6 +15,7 @@ export const router = createBrowserRouter([
     element: <AppLayout />,
     children: [
       { index: true, element: <HomeRoute /> },
+      { path: 'design', lazy: async () => ({ Component: (await import('./routes/design')).DesignRoute }) },
       { path: 'sign-up', lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }) },
       { path: 'sign-in', lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
       {
@@ -31,6 +32,18 @@ export const router = createBrowserRouter([
       },
       { path: 'team', lazy: async () => ({ Component: (await import('./routes/team')).TeamRoute }) },
       { path: 'account', lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }) },
+      // The team library (issue 5).
+      { path: 'presets', lazy: async () => ({ Component: (await import('./routes/presets')).PresetsRoute }) },
+      {
+        path: 'presets/:presetId',
+        lazy: async () => ({ Component: (await import('./routes/preset-detail')).PresetDetailRoute }),
+      },
+      {
+        path: 'printers',
+        lazy: async () => ({ Component: (await import('./routes/printer-profiles')).PrinterProfilesRoute }),
+      },
+      { path: 'materials', lazy: async () => ({ Component: (await import('./routes/materials')).MaterialsRoute }) },
+      { path: 'kits', lazy: async () => ({ Component: (await import('./routes/kit-history')).KitHistoryRoute }) },
       ...outbox,
       { path: '*', element: <NotFoundRoute /> },
     ],

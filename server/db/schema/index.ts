@@ -6,3 +6,8 @@ export * from './team-members';
 export * from './invitations';
 export * from './account-tokens';
 export * from './audit-events';
+export * from './printer-profiles';
+export * from './team-materials';
+export * from './presets';
+export * from './preset-versions';
+export * from './kit-downloads';

@@ -5,6 +5,9 @@ import { hashPassword } from '../../auth/password';
 import { insertMember } from '../../modules/teams/teams.repository';
 import { createTeamWithOwner, personalTeamName } from '../../modules/teams/teams.service';
 import { demoPassword, demoPeople, demoStudio } from './demo-scenario';
+import { seedTeamLibrary } from './seed-team-library';
+import type { SessionUser } from '../../auth/sessions';
+import type { Role } from '../../../shared/schemas/team';
 
 /** Inserts the demo scenario; running it again changes nothing (idempotent by natural keys). */
 export async function seedDemoData(db: Database): Promise<void> {
@@ -17,10 +20,22 @@ export async function seedDemoData(db: Database): Promise<void> {
     for (const [i, person] of demoPeople.entries()) {
       await insertMember(tx, { teamId, userId: ids[i] as string, role: person.role });
     }
+    await seedTeamLibrary(tx, teamId, {
+      owner: await sessionUser(tx, 'owner', ids),
+      editor: await sessionUser(tx, 'editor', ids),
+    });
   });
 }
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
+
+// The demo person of a role as a signed-in user, for the library seed's versions and history.
+async function sessionUser(tx: Tx, role: Role, ids: string[]): Promise<SessionUser> {
+  const id = ids[demoPeople.findIndex((p) => p.role === role)] as string;
+  const [u] = await tx.select().from(users).where(eq(users.id, id));
+  if (!u) throw new Error(`demo ${role} vanished`);
+  return { id: u.id, email: u.email, name: u.name, emailVerified: u.emailVerifiedAt !== null };
+}
 
 // A demo person exists like a real one: verified address, personal team.
 async function ensurePerson(tx: Tx, person: { name: string; email: string }): Promise<string> {

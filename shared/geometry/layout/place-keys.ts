@@ -1,9 +1,12 @@
 import type { Face } from '../../schemas/face';
+import { GeometryError } from '../geometry-error';
 import { arrangeKeys } from './arrange-keys';
 import { climbWall } from './climb-wall';
+import { fastKeys } from './fast-keys';
 import type { Footprint, Point2 } from './footprint';
 import { keyLayoutError } from './key-layout-error';
 import { keyRegion, type KeyRegion } from './key-region';
+import { minKeyDistance } from './min-key-distance';
 import { pointSetWidth } from './point-set-width';
 import { refineKeys } from './refine-keys';
 import { searchCandidates, type CandidateSearch } from './search-candidates';
@@ -56,6 +59,24 @@ export function placeKeys(params: PlaceKeysParams): Array<[number, number]> {
   if (count !== undefined && count > MAX_KEYS) throw keyLayoutError({ kind: 'over-cap', cap: MAX_KEYS, asked: count });
   if (face.shape === 'polygon') validatePolygon(face.points);
   const region = keyRegion(face, footprint, margin, keyLabel);
+  // Rect and round faces with a count: regular layouts built directly. When they are spread so
+  // far apart that no two pockets come near each other's wall, spacing never limited them and
+  // they are final; crowded ones compete with the search, which handles tight packings better.
+  const fast = count === undefined ? null : fastKeys(face, region, count, MIN_STAGGER_MM);
+  if (fast && (fast.length < 2 || minKeyDistance(fast) >= region.clashDistance)) return tidied(fast);
+  let searched: Point2[];
+  try {
+    searched = searchedKeys(params, region);
+  } catch (e) {
+    if (fast && e instanceof GeometryError) return tidied(fast);
+    throw e;
+  }
+  return fast && minKeyDistance(fast) > minKeyDistance(searched) ? tidied(fast) : searched;
+}
+
+/** The general layout: candidate search, farthest-point selection, refinement, stagger. */
+function searchedKeys(params: PlaceKeysParams, region: KeyRegion): Point2[] {
+  const { footprint, margin, count, keyLabel } = params;
   const search = searchCandidates(region);
   if (search.points.n === 0) {
     throw keyLayoutError({ kind: 'no-spot', keyLabel, margin, footprint, bestWall: search.bestWall });
@@ -67,6 +88,11 @@ export function placeKeys(params: PlaceKeysParams): Array<[number, number]> {
   }
   if (keys.length <= 1) keys = [singleKey(region, search)];
   if (keys.length >= 3 && pointSetWidth(keys) < MIN_STAGGER_MM) keys = staggered(keys, region, search, params);
+  return tidied(keys);
+}
+
+/** The keys rounded by {@link tidy}, sorted by x then y. */
+function tidied(keys: Point2[]): Array<[number, number]> {
   return keys.map(([x, y]): Point2 => [tidy(x), tidy(y)]).sort((p, q) => p[0] - q[0] || p[1] - q[1]);
 }
 

@@ -5,6 +5,14 @@ import { useMe } from '../../lib/session';
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   `rounded-md px-3 py-2 font-medium ${isActive ? 'bg-ink text-paper' : 'text-ink hover:bg-paper-deep'}`;
 
+// The team library's pages, shown to signed-in people.
+const libraryLinks = [
+  ['/presets', 'Presets'],
+  ['/printers', 'Printers'],
+  ['/materials', 'Materials'],
+  ['/kits', 'Kit history'],
+] as const;
+
 /** The frame of every page: name and navigation on top, version at the bottom. */
 export function AppLayout() {
   const { data: me } = useMe();
@@ -16,15 +24,24 @@ export function AppLayout() {
             <img src="/favicon.svg" alt="" width={28} height={28} />
             Seamwright
           </NavLink>
-          <nav aria-label="Main" className="flex gap-1">
+          <nav aria-label="Main" className="flex flex-wrap gap-1">
             <NavLink to="/" end className={navLinkClass}>
               Home
+            </NavLink>
+            <NavLink to="/design" className={navLinkClass}>
+              Design
             </NavLink>
             {me && (
               <NavLink to="/team" className={navLinkClass}>
                 Team
               </NavLink>
             )}
+            {me &&
+              libraryLinks.map(([to, label]) => (
+                <NavLink key={to} to={to} className={navLinkClass}>
+                  {label}
+                </NavLink>
+              ))}
           </nav>
           <SessionNav />
         </div>

@@ -8,6 +8,7 @@ import { insertInvitation } from '../../../../server/modules/invitations/invitat
 import { insertMember } from '../../../../server/modules/teams/teams.repository';
 import { createTeamWithOwner } from '../../../../server/modules/teams/teams.service';
 import { uniqueEmail } from '../../../helpers/auth-app';
+import { buildLibrary, type LibraryIds } from './library-cell';
 
 export const ACTORS = ['anonymous', 'viewer', 'editor', 'owner', 'outsider'] as const;
 export type Actor = (typeof ACTORS)[number];
@@ -29,6 +30,8 @@ export interface Cell {
   /** A pending invitation of the team addressed to the acting person (or to nobody in particular). */
   invitationToken: string;
   cookie: string | null;
+  /** The team library: one preset, printer profile, team material and recorded kit. */
+  library: LibraryIds;
 }
 
 /**
@@ -57,6 +60,7 @@ export async function buildCell(db: Database, sessions: Sessions, people: Cell['
     invitedBy: owner.id,
     expiresAt: new Date(Date.now() + 60 * 60_000),
   });
+  const library = await buildLibrary(db, team.id, owner);
   const cookie = actor === 'anonymous' ? null : `${SESSION_COOKIE}=${(await sessions.start(people[actor].id)).id}`;
   return {
     actor,
@@ -66,5 +70,6 @@ export async function buildCell(db: Database, sessions: Sessions, people: Cell['
     invitationId: invitation.id,
     invitationToken,
     cookie,
+    library,
   };
 }

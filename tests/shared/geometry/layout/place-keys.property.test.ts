@@ -55,7 +55,8 @@ describe('placeKeys', () => {
         if (out instanceof GeometryError) {
           expect(EXPECTED_CODES).toContain(out.code);
           // "Nothing fits" must be true: an independent sample of the face finds no spot either.
-          if (out.code === 'FACE_TOO_SMALL') expect(sampledBestWall(r)).toBeLessThan(r.margin + 1e-6);
+          // A face exactly at the limit (within 0.1 µm) may go either way: the layout keeps a hair of tolerance.
+          if (out.code === 'FACE_TOO_SMALL') expect(sampledBestWall(r)).toBeLessThan(r.margin + 1e-4);
           return;
         }
         if (r.count !== undefined) expect(out).toHaveLength(r.count);

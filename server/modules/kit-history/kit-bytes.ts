@@ -1,0 +1,31 @@
+import { createHash } from 'node:crypto';
+import { Writable } from 'node:stream';
+import type { KitFile } from '../../../shared/kit/build-kit';
+import type { KitManifest } from '../../../shared/kit/kit-manifest';
+import type { KitFileHash } from '../../../shared/schemas/kit-history';
+import { writeZip } from '../kits/kit-zip';
+
+/** SHA-256 (hex) and size of every STL of a kit: what a later rebuild is compared with. */
+export function stlHashes(files: readonly KitFile[]): KitFileHash[] {
+  return files
+    .filter((f) => f.name.endsWith('.stl'))
+    .map((f) => ({
+      name: f.name,
+      bytes: f.bytes.byteLength,
+      sha256: createHash('sha256').update(f.bytes).digest('hex'),
+    }));
+}
+
+/** The kit as one zip in memory: manifest.json first, then the STLs and README.txt (as POST /api/kits sends it). */
+export async function zipKit(kit: { manifest: KitManifest; files: readonly KitFile[] }): Promise<Buffer> {
+  const manifest = new TextEncoder().encode(`${JSON.stringify(kit.manifest, null, 2)}\n`);
+  const chunks: Buffer[] = [];
+  const sink = new Writable({
+    write(chunk: Buffer, _encoding, done) {
+      chunks.push(chunk);
+      done();
+    },
+  });
+  await writeZip([{ name: 'manifest.json', bytes: manifest }, ...kit.files], sink);
+  return Buffer.concat(chunks);
+}

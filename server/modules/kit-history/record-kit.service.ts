@@ -1,0 +1,103 @@
+import type { Executor } from '../../db/executor';
+import type { SessionUser } from '../../auth/sessions';
+import { AppError } from '../../errors/app-error';
+import { buildKit } from '../../../shared/kit/build-kit';
+import type { KitManifest } from '../../../shared/kit/kit-manifest';
+import type { KitSummary, ParsedRecordKitInput } from '../../../shared/schemas/kit-history';
+import type { PrinterProfile } from '../../../shared/schemas/printer-profile';
+import { kitRequestSchema } from '../../../shared/schemas/kit-request';
+import { requireTeamRole } from '../teams/team-access';
+import { kitFileName } from '../kits/kits.service';
+import { findPreset } from '../presets/presets.repository';
+import { findVersion } from '../presets/preset-versions.repository';
+import { findProfile } from '../printer-profiles/printer-profiles.repository';
+import { applyCalibration, namedDerivation, type CalibratedRequest } from './kit-calibration';
+import { stlHashes, zipKit } from './kit-bytes';
+import { ENGINE_VERSION } from './engine-version';
+import { insertKitDownload } from './kit-history.repository';
+
+const notOurs = (path: string, what: string) =>
+  new AppError('VALIDATION_FAILED', `The ${what} chosen is not one of this team’s.`, [
+    { path, message: `Choose one of this team’s ${what}s, or none.` },
+  ]);
+
+/** The manifest summary the history keeps (the full manifest stays inside the original zip). */
+export function summaryOf(manifest: KitManifest, calibration: CalibratedRequest['calibration']): KitSummary {
+  const r = manifest.request;
+  return {
+    joint: r.joint,
+    process: r.process,
+    material: r.material,
+    fit: r.fit,
+    clearancePerSide: manifest.clearancePerSide,
+    ...(manifest.keyScale !== undefined ? { keyScale: manifest.keyScale } : {}),
+    derivation: namedDerivation(manifest.fit.derivation, calibration),
+    warnings: manifest.warnings,
+    parts: manifest.parts.map(({ file, role, half, quantity, triangles, volumeMm3 }) => ({
+      file,
+      role,
+      half,
+      quantity,
+      triangles,
+      volumeMm3,
+    })),
+  };
+}
+
+async function presetOf(db: Executor, teamId: string, input: ParsedRecordKitInput) {
+  if (!input.presetId) return null;
+  const preset = await findPreset(db, teamId, input.presetId);
+  if (!preset) throw notOurs('presetId', 'preset');
+  const version = input.presetVersion ?? preset.version;
+  if (input.presetVersion !== null && !(await findVersion(db, preset.id, version))) {
+    throw new AppError('VALIDATION_FAILED', `Preset "${preset.name}" has no version ${version}.`, [
+      { path: 'presetVersion', message: `There is no version ${version}.` },
+    ]);
+  }
+  return { id: preset.id, name: preset.name, version, printerProfileId: preset.printerProfileId };
+}
+
+/**
+ * Builds a kit for a signed-in member and records it in the team's history: who, when, the full request,
+ * the preset and version, the printer profile whose calibration the fit engine used, the manifest summary,
+ * a SHA-256 per STL and the zip itself. Any member may (viewers download kits too).
+ *
+ * @param db - the database, or the seed's transaction
+ * @returns the history id, the download name and the zip
+ */
+export async function recordKit(db: Executor, user: SessionUser, teamId: string, input: ParsedRecordKitInput) {
+  await requireTeamRole(db, teamId, user, 'viewer');
+  const preset = await presetOf(db, teamId, input);
+  const profileId = input.printerProfileId ?? preset?.printerProfileId ?? null;
+  let profile: PrinterProfile | null = null;
+  if (profileId) {
+    profile = await findProfile(db, teamId, profileId);
+    if (!profile) throw notOurs('printerProfileId', 'printer profile');
+  }
+  const calibrated = applyCalibration(input.request, profile);
+  const calibration = calibrated.calibration;
+  // Parsed once more so the keys come in the schema's order: jsonb keeps no key order, and a rebuild from the
+  // stored request must write the very same manifest.json (a resolved request parses again to itself).
+  const request = kitRequestSchema.parse(calibrated.request);
+  const kit = buildKit(request);
+  const zip = await zipKit(kit);
+  const fileName = kitFileName(request);
+  const id = await insertKitDownload(db, {
+    teamId,
+    userId: user.id,
+    userName: user.name,
+    presetId: preset?.id ?? null,
+    presetName: preset?.name ?? null,
+    presetVersion: preset?.version ?? null,
+    printerProfileId: profile?.id ?? null,
+    printerProfileName: profile?.name ?? null,
+    calibration,
+    request: request as Record<string, unknown>,
+    summary: summaryOf(kit.manifest, calibration),
+    files: stlHashes(kit.files),
+    fileName,
+    engineVersion: ENGINE_VERSION,
+    zip,
+  });
+  return { id, fileName, zip };
+}

@@ -1,0 +1,106 @@
+import { Link } from 'react-router-dom';
+import { useWatch, type Control, type UseFormSetValue } from 'react-hook-form';
+import { defaultProcessFor } from '../../../../shared/fit/default-process-for';
+import { materialSchema, type Material } from '../../../../shared/schemas/joint-options';
+import type { DesignValues } from '../lib/design-values';
+import type { LengthUnit } from '../lib/units';
+import { ChoiceField } from './form/choice-field';
+import { NumberField } from './form/number-field';
+import { SelectField } from './form/select-field';
+
+const materialNames: Record<Material, string> = {
+  PLA: 'PLA',
+  PETG: 'PETG',
+  ABS: 'ABS',
+  ASA: 'ASA',
+  PA: 'PA (nylon)',
+  TPU: 'TPU (flexible)',
+  'resin-standard': 'Standard resin',
+  'resin-tough': 'Tough resin',
+};
+
+const fits = [
+  { value: 'press', label: 'Press', detail: 'Pushed in with force; stays put without glue.' },
+  { value: 'snug', label: 'Snug', detail: 'Lines up exactly; glued.' },
+  { value: 'slide', label: 'Slide', detail: 'Comes apart by hand.' },
+];
+
+interface FitFieldsProps {
+  control: Control<DesignValues>;
+  setValue: UseFormSetValue<DesignValues>;
+  unit: LengthUnit;
+  signedIn: boolean;
+}
+
+/** Printing process, material, fit class and clearance (derived by the fit engine, or the maker's own). */
+export function FitFields({ control, setValue, unit, signedIn }: FitFieldsProps) {
+  const process = useWatch({ control, name: 'process' });
+  const clearanceMode = useWatch({ control, name: 'clearanceMode' });
+  const materials = materialSchema.options
+    .filter((m) => defaultProcessFor(m) === process)
+    .map((m) => ({ value: m, label: materialNames[m] }));
+  return (
+    <fieldset className="space-y-4">
+      <legend className="text-lead font-bold">Material and fit</legend>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <SelectField
+          control={control}
+          name="process"
+          label="Printing process"
+          options={[
+            { value: 'fdm', label: 'Filament (FDM)' },
+            { value: 'resin', label: 'Resin' },
+          ]}
+          onPicked={(p) => setValue('material', p === 'resin' ? 'resin-standard' : 'PLA', { shouldValidate: true })}
+        />
+        <SelectField control={control} name="material" label="Material" options={materials} />
+      </div>
+      <ChoiceField control={control} name="fit" legend="How should the joint hold?" options={fits} />
+      <ChoiceField
+        control={control}
+        name="clearanceMode"
+        legend="Clearance per side"
+        columns={2}
+        options={[
+          { value: 'derived', label: 'Work it out for me', detail: 'From the material, fit and printer correction.' },
+          { value: 'set', label: 'I know my number', detail: 'Use my own gap per side.' },
+        ]}
+      />
+      {clearanceMode === 'set' && (
+        <NumberField
+          control={control}
+          name="clearance"
+          label="Clearance per side"
+          unit={unit}
+          hint="Gap between key and pocket wall on each side."
+        />
+      )}
+      <NumberField
+        control={control}
+        name="calibrationOffset"
+        label="Printer correction (optional)"
+        unit={unit}
+        placeholder="none"
+        hint="From your printer’s fit test: positive if test keys came out tight, negative if loose."
+      />
+      <p className="text-sm text-ink-soft">
+        {signedIn ? (
+          <>
+            Saved printer profiles live under{' '}
+            <Link to="/printer-profiles" className="font-medium text-ink underline underline-offset-4">
+              printer profiles
+            </Link>
+            .
+          </>
+        ) : (
+          <>
+            <Link to="/sign-in" className="font-medium text-ink underline underline-offset-4">
+              Sign in
+            </Link>{' '}
+            to keep printer profiles with your fit-test numbers.
+          </>
+        )}
+      </p>
+    </fieldset>
+  );
+}

@@ -1,0 +1,56 @@
+import { useEffect, useMemo } from 'react';
+import { ExtrudeGeometry, Shape, Vector2, type Plane } from 'three';
+import type { Face } from '../../../../../shared/schemas/face';
+
+/** The face's outline as a flat three.js shape in the cut plane, mm. */
+function faceShape(face: Face): Shape {
+  if (face.shape === 'rect') {
+    const s = new Shape();
+    s.moveTo(-face.width / 2, -face.height / 2);
+    s.lineTo(face.width / 2, -face.height / 2);
+    s.lineTo(face.width / 2, face.height / 2);
+    s.lineTo(-face.width / 2, face.height / 2);
+    s.closePath();
+    return s;
+  }
+  if (face.shape === 'circle') {
+    const s = new Shape();
+    s.absarc(0, 0, face.diameter / 2, 0, Math.PI * 2, false);
+    return s;
+  }
+  return new Shape(face.points.map(([x, y]) => new Vector2(x, y)));
+}
+
+interface FaceSlabProps {
+  face: Face;
+  /** Half A reaches down from the cut face, half B up from it. */
+  half: 'A' | 'B';
+  thickness: number;
+  color: string;
+  clip: Plane[];
+}
+
+/**
+ * A stand-in for one half of the maker's model: the cut face pushed out `thickness` mm, drawn see-through
+ * so the pockets, keys and rails inside show. It is only a picture; the kit never contains it.
+ */
+export function FaceSlab({ face, half, thickness, color, clip }: FaceSlabProps) {
+  const geometry = useMemo(() => {
+    const g = new ExtrudeGeometry(faceShape(face), { depth: thickness, bevelEnabled: false, curveSegments: 48 });
+    if (half === 'A') g.translate(0, 0, -thickness);
+    return g;
+  }, [face, half, thickness]);
+  useEffect(() => () => geometry.dispose(), [geometry]);
+  return (
+    <mesh geometry={geometry} renderOrder={2}>
+      <meshStandardMaterial
+        color={color}
+        transparent
+        opacity={0.16}
+        depthWrite={false}
+        clippingPlanes={clip}
+        roughness={0.9}
+      />
+    </mesh>
+  );
+}

@@ -1,0 +1,150 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
+import { fitClassSchema, materialSchema } from '../../../../shared/schemas/joint-options';
+import { printerProfileInputSchema, type PrinterProfileInput } from '../../../../shared/schemas/printer-profile';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { TextField } from '../../../components/ui/text-field';
+import { showApiError } from '../../../lib/form-errors';
+
+const cell = 'rounded-md border border-ink-faint bg-white px-2 py-1';
+const num = { setValueAs: (v: unknown) => (v === '' || v === null ? null : Number(v)) };
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** A printer profile: process, build volume, nozzle, layer height, notes and its calibration table. */
+export function PrinterProfileForm({
+  initial,
+  onSubmit,
+}: {
+  initial: PrinterProfileInput;
+  onSubmit: (v: PrinterProfileInput) => Promise<unknown>;
+}) {
+  const form = useForm<PrinterProfileInput>({
+    resolver: zodResolver(printerProfileInputSchema) as unknown as Resolver<PrinterProfileInput>,
+    defaultValues: initial,
+  });
+  const { register, handleSubmit, setError, control, formState, watch } = form;
+  const rows = useFieldArray({ control, name: 'calibration' });
+  const { errors, isSubmitting } = formState;
+  const isFdm = watch('process') === 'fdm';
+  const submit = handleSubmit(async (values) => {
+    try {
+      await onSubmit(values);
+    } catch (error) {
+      showApiError(error, setError, ['name', 'nozzleDiameter', 'layerHeight']);
+    }
+  });
+  return (
+    <form onSubmit={submit} noValidate className="space-y-4">
+      {errors.root?.message && <Notice tone="error">{errors.root.message}</Notice>}
+      <TextField label="Name" registration={register('name')} error={errors.name} />
+      <label className="flex flex-col gap-1">
+        <span className="font-medium">Process</span>
+        <select className={cell} {...register('process')}>
+          <option value="fdm">FDM (filament)</option>
+          <option value="resin">Resin</option>
+        </select>
+      </label>
+      <fieldset className="grid gap-3 sm:grid-cols-3">
+        <legend className="font-medium">Build volume, mm</legend>
+        {(['x', 'y', 'z'] as const).map((axis) => (
+          <TextField
+            key={axis}
+            label={axis}
+            type="number"
+            step="any"
+            registration={register(`buildVolume.${axis}`, num)}
+            error={errors.buildVolume?.[axis]}
+          />
+        ))}
+      </fieldset>
+      {isFdm && (
+        <TextField
+          label="Nozzle diameter, mm"
+          type="number"
+          step="any"
+          registration={register('nozzleDiameter', num)}
+          error={errors.nozzleDiameter}
+        />
+      )}
+      <TextField
+        label="Layer height, mm"
+        type="number"
+        step="any"
+        registration={register('layerHeight', num)}
+        error={errors.layerHeight}
+      />
+      <label className="flex flex-col gap-1">
+        <span className="font-medium">Notes</span>
+        <textarea className={cell} rows={2} {...register('notes')} />
+      </label>
+      <fieldset className="space-y-2">
+        <legend className="font-medium">
+          Calibration: the clearance offset this printer needs, per material and fit
+        </legend>
+        {rows.fields.length === 0 && (
+          <p className="text-sm text-ink-soft">No entries: the fit engine uses the published defaults.</p>
+        )}
+        {rows.fields.map((field, i) => {
+          const e = errors.calibration?.[i];
+          return (
+            <div key={field.id} className="flex flex-wrap items-end gap-2">
+              <select aria-label="Material" className={cell} {...register(`calibration.${i}.material`)}>
+                {materialSchema.options.map((m) => (
+                  <option key={m}>{m}</option>
+                ))}
+              </select>
+              <select aria-label="Fit" className={cell} {...register(`calibration.${i}.fit`)}>
+                {fitClassSchema.options.map((f) => (
+                  <option key={f}>{f}</option>
+                ))}
+              </select>
+              <input
+                aria-label="Offset, mm per side"
+                className={`${cell} w-24`}
+                type="number"
+                step="0.01"
+                {...register(`calibration.${i}.offsetMm`, num)}
+              />
+              <input
+                aria-label="Measured on"
+                className={cell}
+                type="date"
+                {...register(`calibration.${i}.measuredOn`)}
+              />
+              <input aria-label="Source" className={cell} {...register(`calibration.${i}.source`)} />
+              <Button variant="quiet" onClick={() => rows.remove(i)}>
+                Remove
+              </Button>
+              {e && (
+                <p role="alert" className="w-full text-sm font-medium text-kiln">
+                  {Object.values(e)
+                    .map((x) => (x as { message?: string })?.message)
+                    .filter(Boolean)
+                    .join(' ')}
+                </p>
+              )}
+            </div>
+          );
+        })}
+        <Button
+          variant="quiet"
+          onClick={() =>
+            rows.append({
+              material: isFdm ? 'PLA' : 'resin-standard',
+              fit: 'snug',
+              offsetMm: 0,
+              measuredOn: today(),
+              source: 'entered by hand',
+            })
+          }
+        >
+          Add a calibration entry
+        </Button>
+      </fieldset>
+      <Button type="submit" disabled={isSubmitting}>
+        Save printer profile
+      </Button>
+    </form>
+  );
+}
