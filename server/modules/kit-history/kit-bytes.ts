@@ -3,7 +3,7 @@ import { Writable } from 'node:stream';
 import type { KitFile } from '../../../shared/kit/build-kit';
 import type { KitManifest } from '../../../shared/kit/kit-manifest';
 import type { KitFileHash } from '../../../shared/schemas/kit-history';
-import { writeZip } from '../kits/kit-zip';
+import { withManifest, writeZip } from '../kits/kit-zip';
 
 /** SHA-256 (hex) and size of every STL of a kit: what a later rebuild is compared with. */
 export function stlHashes(files: readonly KitFile[]): KitFileHash[] {
@@ -18,7 +18,6 @@ export function stlHashes(files: readonly KitFile[]): KitFileHash[] {
 
 /** The kit as one zip in memory: manifest.json first, then the STLs and README.txt (as POST /api/kits sends it). */
 export async function zipKit(kit: { manifest: KitManifest; files: readonly KitFile[] }): Promise<Buffer> {
-  const manifest = new TextEncoder().encode(`${JSON.stringify(kit.manifest, null, 2)}\n`);
   const chunks: Buffer[] = [];
   const sink = new Writable({
     write(chunk: Buffer, _encoding, done) {
@@ -26,6 +25,6 @@ export async function zipKit(kit: { manifest: KitManifest; files: readonly KitFi
       done();
     },
   });
-  await writeZip([{ name: 'manifest.json', bytes: manifest }, ...kit.files], sink);
+  await writeZip(withManifest(kit.manifest, kit.files), sink);
   return Buffer.concat(chunks);
 }

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { ZipArchive } from 'archiver';
 import type { Writable } from 'node:stream';
 
@@ -28,4 +29,19 @@ export async function writeZip(entries: ZipEntry[], out: Writable): Promise<void
     });
   await archive.finalize();
   await done;
+}
+
+/** A download's entries: manifest.json first (pretty-printed), then the builder's files in their order. */
+export function withManifest(manifest: unknown, files: readonly ZipEntry[]): ZipEntry[] {
+  const bytes = new TextEncoder().encode(`${JSON.stringify(manifest, null, 2)}\n`);
+  return [{ name: 'manifest.json', bytes }, ...files];
+}
+
+/**
+ * A download name that says what is inside and changes with the request: "seamwright-key-kit-3f9a1c2e.zip".
+ * The hash is of the resolved request, so the same request always downloads under the same name.
+ */
+export function downloadName(label: string, request: unknown): string {
+  const digest = createHash('sha256').update(JSON.stringify(request)).digest('hex').slice(0, 8);
+  return `seamwright-${label}-${digest}.zip`;
 }

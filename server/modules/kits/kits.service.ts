@@ -1,24 +1,13 @@
-import { createHash } from 'node:crypto';
 import type { Writable } from 'node:stream';
 import { buildKit, summarizeKit as summarizeKitManifest } from '../../../shared/kit/build-kit';
 import type { ResolvedKitRequest } from '../../../shared/schemas/kit-request';
-import { writeZip, type ZipEntry } from './kit-zip';
+import { downloadName, withManifest, writeZip } from './kit-zip';
 
 type Kit = ReturnType<typeof buildKit>;
 
-/** The kit's files as zip entries: the STLs and README.txt from the builder, plus manifest.json. */
-function kitEntries(kit: Kit): ZipEntry[] {
-  const manifest = new TextEncoder().encode(`${JSON.stringify(kit.manifest, null, 2)}\n`);
-  return [{ name: 'manifest.json', bytes: manifest }, ...kit.files];
-}
-
-/**
- * A download name that says what is inside and changes with the request: "seamwright-key-kit-3f9a1c2e.zip".
- * The hash is of the resolved request, so the same request always downloads under the same name.
- */
+/** The download name of a kit: "seamwright-key-kit-3f9a1c2e.zip", the same for the same request. */
 export function kitFileName(request: ResolvedKitRequest): string {
-  const digest = createHash('sha256').update(JSON.stringify(request)).digest('hex').slice(0, 8);
-  return `seamwright-${request.joint}-kit-${digest}.zip`;
+  return downloadName(`${request.joint}-kit`, request);
 }
 
 /**
@@ -29,7 +18,8 @@ export function prepareKitZip(request: ResolvedKitRequest): {
   fileName: string;
   writeTo: (out: Writable) => Promise<void>;
 } {
-  const entries = kitEntries(buildKit(request));
+  const kit = buildKit(request);
+  const entries = withManifest(kit.manifest, kit.files);
   return { fileName: kitFileName(request), writeTo: (out) => writeZip(entries, out) };
 }
 
