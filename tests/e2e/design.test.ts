@@ -204,3 +204,28 @@ describe('preview update time (reported, not asserted)', () => {
     await p.close();
   }, 120_000);
 });
+
+describe('design screen, signed in', () => {
+  it('records the downloaded kit in the current team’s kit history', async () => {
+    const member = await app.newContext();
+    const email = `e2e-record-${Date.now().toString(36)}@quillmoss.example`;
+    const signUp = await member.request.post('/api/auth/sign-up', {
+      data: { email, password: 'walnut-dowel-clamp-77', name: 'Bench Recorder' },
+    });
+    expect(signUp.status()).toBe(201);
+    const me = await (await member.request.get('/api/me')).json();
+    const teamId = me.teams[0].id as string;
+    const p = await member.newPage();
+    await p.goto('/design');
+    await upToDate(p);
+    await expect.poll(() => p.getByText('Each download is kept in the kit history').count()).toBe(1);
+    const [download] = await Promise.all([
+      p.waitForEvent('download'),
+      p.getByRole('button', { name: 'Download the kit (.zip)' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(/^seamwright-key-kit-[0-9a-f]{8}\.zip$/);
+    const history = await (await member.request.get(`/api/teams/${teamId}/kits`)).json();
+    expect(history.items).toHaveLength(1);
+    await member.close();
+  });
+});

@@ -1,6 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
 import type { KitRequest } from '../../../../shared/schemas/kit-request';
 import { ApiError } from '../../../lib/api-client';
+import { useCurrentTeam } from '../../../lib/session';
 
 /** A downloaded file: its bytes and the name the server gave it. */
 export interface DownloadedFile {
@@ -8,14 +9,25 @@ export interface DownloadedFile {
   readonly name: string;
 }
 
-/** POST /api/kits: the kit as a zip (STL files, manifest.json, README.txt). No sign-in needed. */
-export async function downloadKit(request: KitRequest): Promise<DownloadedFile> {
+/**
+ * The kit as a zip (STL files, manifest.json, README.txt). Signed out: POST /api/kits (no account needed).
+ * Signed in with a current team: POST /api/teams/:teamId/kits, which builds the same zip and records it in
+ * the team's kit history (who, when, the full request), so it can be downloaded again later.
+ */
+export async function downloadKit({
+  request,
+  teamId,
+}: {
+  request: KitRequest;
+  teamId?: string;
+}): Promise<DownloadedFile> {
+  const [url, body] = teamId ? [`/api/teams/${teamId}/kits`, { request }] : ['/api/kits', request];
   let response: Response;
   try {
-    response = await fetch('/api/kits', {
+    response = await fetch(url, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify(request),
+      body: JSON.stringify(body),
       credentials: 'same-origin',
     });
   } catch {
@@ -36,5 +48,6 @@ export async function downloadKit(request: KitRequest): Promise<DownloadedFile> 
 
 /** The zip download as a mutation: pending while the server builds, the error in the server's words. */
 export function useDownloadKit() {
-  return useMutation({ mutationFn: downloadKit });
+  const { team } = useCurrentTeam();
+  return useMutation({ mutationFn: (request: KitRequest) => downloadKit({ request, teamId: team?.id }) });
 }

@@ -3,6 +3,7 @@ import type { KitRequest } from '../../../../shared/schemas/kit-request';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { useDownloadKit } from '../api/download-kit';
+import { useCurrentTeam } from '../../../lib/session';
 import type { PreviewKit } from '../lib/preview-kit';
 import { saveFile } from '../lib/save-file';
 
@@ -29,6 +30,7 @@ interface KitDownloadsProps {
 /** What is in the kit, file by file, and the downloads: the whole zip from the server, or one STL. */
 export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, stl }: KitDownloadsProps) {
   const zip = useDownloadKit();
+  const { team } = useCurrentTeam();
   const [partError, setPartError] = useState<string | null>(null);
   const ready = Boolean(request && kit && !blocked);
   const binary = kit?.manifest.request.format !== 'ascii';
@@ -91,6 +93,7 @@ export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, 
           >
             {zip.isPending ? 'Preparing the kit…' : 'Download the kit (.zip)'}
           </Button>
+          {team && <p className="text-sm text-ink-soft">Each download is kept in the kit history of {team.name}.</p>}
         </>
       )}
     </section>
