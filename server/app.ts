@@ -18,6 +18,7 @@ import { outboxRoutes, type Outbox } from './modules/dev-outbox/outbox.routes';
 import { presetTransferRoutes } from './modules/presets/preset-transfer.routes';
 import { presetsRoutes } from './modules/presets/presets.routes';
 import { printerProfilesRoutes } from './modules/printer-profiles/printer-profiles.routes';
+import { fitTestsRoutes } from './modules/fit-tests/fit-tests.routes';
 import { materialsRoutes } from './modules/materials/materials.routes';
 import { kitHistoryRoutes } from './modules/kit-history/kit-history.routes';
 import { createSessions } from './auth/sessions';
@@ -83,6 +84,7 @@ export function createApp({
   api.use(presetTransferRoutes(ctx));
   api.use(presetsRoutes(ctx));
   api.use(printerProfilesRoutes(ctx));
+  api.use(fitTestsRoutes(ctx));
   api.use(materialsRoutes(ctx));
   api.use(kitHistoryRoutes(ctx));
   if (outbox) api.use(outboxRoutes(outbox));

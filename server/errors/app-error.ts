@@ -10,6 +10,8 @@ export const errorStatus = {
   CONFLICT: 409,
   PAYLOAD_TOO_LARGE: 413,
   GEOMETRY_IMPOSSIBLE: 422,
+  // Well-formed input that cannot be used as it stands, e.g. a fit test whose answers contradict each other.
+  UNPROCESSABLE: 422,
   RATE_LIMITED: 429,
   INTERNAL: 500,
   SERVICE_UNAVAILABLE: 503,

@@ -25,3 +25,4 @@ export { dowelPocketDiameter, type DowelPocket } from './dowel-pocket-diameter';
 export { isoFitSchema } from './iso-fit-schema';
 export { isoGrades, shaftLetters, type IsoGrade, type ShaftLetter } from './iso286-tables';
 export { deriveCalibration, type CalibrationReading } from './derive-calibration';
+export { calibrationOffsets, MAX_CALIBRATION_OFFSET_MM, type CalibrationOffsets } from './calibration-offsets';

@@ -11,6 +11,8 @@ export const auditActionSchema = z.enum([
   'member.left',
   'invitation.created',
   'invitation.revoked',
+  'fit_test.recorded',
+  'fit_test.made_current',
 ]);
 export type AuditAction = z.infer<typeof auditActionSchema>;
 

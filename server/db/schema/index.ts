@@ -11,3 +11,4 @@ export * from './team-materials';
 export * from './presets';
 export * from './preset-versions';
 export * from './kit-downloads';
+export * from './fit-tests';

@@ -23,6 +23,10 @@ function describe(e: AuditEvent): string {
       return `invited ${e.subject} as ${e.detail.role}`;
     case 'invitation.revoked':
       return `revoked the invitation of ${e.subject}`;
+    case 'fit_test.recorded':
+      return `recorded a ${e.detail.material} fit test for printer profile "${e.subject}"`;
+    case 'fit_test.made_current':
+      return `made an older ${e.detail.material} fit test current for printer profile "${e.subject}"`;
   }
 }
 

@@ -4,7 +4,7 @@ import { markEmailVerified } from '../../../../server/modules/accounts/users.rep
 import { PASSWORD, signUp, uniqueEmail, useAuthApp } from '../../../helpers/auth-app';
 import { listApiRoutes } from '../../../helpers/list-routes';
 import { ACTORS, buildCell, type Actor, type Cell } from './matrix-fixture';
-import { smallKitRequest } from './library-cell';
+import { matrixFitAnswers, smallKitRequest } from './library-cell';
 
 // The expected answer per actor: a status, or ALLOWED for public routes whose status depends on the
 // body (anything but 401 and 403 shows the route let the actor in).
@@ -131,6 +131,33 @@ function libraryRows(): Row[] {
       expect: team(403, 200, 200),
     },
     { route: 'DELETE /api/teams/:teamId/printer-profiles/:profileId', path: profile, expect: team(403, 403, 204) },
+    // Fit tests (issue 7): members read them, editors record them and make an older one current.
+    {
+      route: 'GET /api/teams/:teamId/printer-profiles/:profileId/fit-tests',
+      path: (c) => `${profile(c)}/fit-tests`,
+      expect: team(200, 200, 200),
+    },
+    {
+      route: 'POST /api/teams/:teamId/printer-profiles/:profileId/fit-tests',
+      path: (c) => `${profile(c)}/fit-tests`,
+      body: () => ({
+        material: 'PLA',
+        joint: 'key',
+        coupon: { clearanceFrom: 0, clearanceTo: 0.2, clearanceStep: 0.05 },
+        answers: matrixFitAnswers,
+      }),
+      expect: team(403, 201, 201),
+    },
+    {
+      route: 'GET /api/teams/:teamId/printer-profiles/:profileId/fit-tests/:testId',
+      path: (c) => `${profile(c)}/fit-tests/${c.library.fitTestId}`,
+      expect: team(200, 200, 200),
+    },
+    {
+      route: 'POST /api/teams/:teamId/printer-profiles/:profileId/fit-tests/:testId/make-current',
+      path: (c) => `${profile(c)}/fit-tests/${c.library.fitTestId}/make-current`,
+      expect: team(403, 200, 200),
+    },
     {
       route: 'GET /api/teams/:teamId/materials/catalogue',
       path: (c) => `${t(c)}/materials/catalogue`,

@@ -10,6 +10,7 @@ import { buildKit } from '../../../../shared/kit/build-kit';
 import { stlHashes, zipKit } from '../../../../server/modules/kit-history/kit-bytes';
 import { summaryOf } from '../../../../server/modules/kit-history/record-kit.service';
 import { withoutFace } from '../../../../shared/schemas/preset-settings';
+import { insertFitTest } from '../../../../server/modules/fit-tests/fit-tests.repository';
 
 /** A small key kit request: builds in well under a second. */
 export const smallKitRequest = {
@@ -34,9 +35,22 @@ export interface LibraryIds {
   printerProfileId: string;
   materialId: string;
   kitId: string;
+  fitTestId: string;
 }
 
-/** One preset, printer profile, team material and recorded kit in the team, written through the repositories. */
+/** Pocket answers of a clean PLA coupon (0.00–0.20 mm in 0.05 mm steps). */
+export const matrixFitAnswers = [
+  { mark: '1', clearancePerSide: 0, outcome: 'no-entry' },
+  { mark: '2', clearancePerSide: 0.05, outcome: 'forced' },
+  { mark: '3', clearancePerSide: 0.1, outcome: 'snug' },
+  { mark: '4', clearancePerSide: 0.15, outcome: 'free' },
+  { mark: '5', clearancePerSide: 0.2, outcome: 'wobbly' },
+] as const;
+
+/**
+ * One preset, printer profile (with one fit test), team material and recorded kit in the team, written
+ * through the repositories.
+ */
 export async function buildLibrary(
   db: Database,
   teamId: string,
@@ -80,5 +94,16 @@ export async function buildLibrary(
     engineVersion: 'matrix',
     zip,
   });
-  return { presetId, printerProfileId, materialId, kitId };
+  const fitTestId = await insertFitTest(db, {
+    teamId,
+    printerProfileId,
+    material: 'PLA',
+    joint: 'key',
+    coupon: { clearanceFrom: 0, clearanceTo: 0.2, clearanceStep: 0.05 },
+    answers: [...matrixFitAnswers],
+    best: { press: { clearancePerSide: 0.05, mark: '2' }, snug: { clearancePerSide: 0.1, mark: '3' } },
+    notes: [],
+    createdBy: owner.id,
+  });
+  return { presetId, printerProfileId, materialId, kitId, fitTestId };
 }
