@@ -42,6 +42,10 @@ export const router = createBrowserRouter([
         path: 'printers',
         lazy: async () => ({ Component: (await import('./routes/printer-profiles')).PrinterProfilesRoute }),
       },
+      {
+        path: 'printers/:profileId/fit-tests',
+        lazy: async () => ({ Component: (await import('./routes/printer-fit-tests')).PrinterFitTestsRoute }),
+      },
       { path: 'materials', lazy: async () => ({ Component: (await import('./routes/materials')).MaterialsRoute }) },
       { path: 'kits', lazy: async () => ({ Component: (await import('./routes/kit-history')).KitHistoryRoute }) },
       ...outbox,

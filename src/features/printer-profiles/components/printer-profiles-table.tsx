@@ -1,4 +1,5 @@
 import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
 import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn, type ListView } from '../../../components/ui/data-table';
@@ -73,6 +74,13 @@ export function PrinterProfilesTable({ teamId, canEdit, canDelete, onEdit }: Pro
         enableSorting: false,
         cell: ({ row }) => (
           <div className="flex gap-2">
+            <Link
+              to={`/printers/${row.original.id}/fit-tests`}
+              className="rounded-md border border-ink-faint px-4 py-2 font-medium text-ink hover:bg-paper-deep"
+              aria-label={`Fit tests of ${row.original.name}`}
+            >
+              Fit tests
+            </Link>
             {canEdit && (
               <Button variant="quiet" onClick={() => onEdit(row.original)}>
                 Edit
