@@ -48,7 +48,8 @@ export function defaultClearanceSteps(input: {
       step: {
         label: `${input.fit} fit default on ${input.process === 'fdm' ? 'FDM' : 'resin'}`,
         mm: base.mm,
-        source: `${base.source} (REFERENCES §7.2)`,
+        // Users see this: name the kind of source, not the project's internal reference list.
+        source: `${base.source} (3D-printing design guides and service-bureau tables)`,
       },
       words: `${formatMm(base.mm)} from ${range}`,
     },
