@@ -1,9 +1,7 @@
 import type { Writable } from 'node:stream';
-import { buildKit, summarizeKit as summarizeKitManifest } from '../../../shared/kit/build-kit';
+import { buildKit } from '../../../shared/kit/build-kit';
 import type { ResolvedKitRequest } from '../../../shared/schemas/kit-request';
 import { downloadName, withManifest, writeZip } from './kit-zip';
-
-type Kit = ReturnType<typeof buildKit>;
 
 /** The download name of a kit: "seamwright-key-kit-3f9a1c2e.zip", the same for the same request. */
 export function kitFileName(request: ResolvedKitRequest): string {
@@ -23,7 +21,5 @@ export function prepareKitZip(request: ResolvedKitRequest): {
   return { fileName: kitFileName(request), writeTo: (out) => writeZip(entries, out) };
 }
 
-/** The manifest alone: what a kit would contain, without writing STL files. */
-export function summarizeKit(request: ResolvedKitRequest): Kit['manifest'] {
-  return summarizeKitManifest(request);
-}
+/** The manifest alone (POST /api/kits/summary): the same numbers as the zip's, without writing STL files. */
+export { summarizeKit } from '../../../shared/kit/build-kit';
