@@ -7,7 +7,7 @@ import globals from 'globals';
 const restrict = (patterns) => ({ 'no-restricted-imports': ['error', { patterns }] });
 
 export default tseslint.config(
-  { ignores: ['dist/', 'node_modules/', '.data/', 'drizzle/', '.screenshots/', 'coverage/'] },
+  { ignores: ['dist/', 'dist-*/', 'node_modules/', '.data/', 'drizzle/', '.screenshots/', 'coverage/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -15,7 +15,7 @@ if (runIncludesBrowserTests(process.argv.slice(2))) {
   ensureChromium();
   buildClient();
 }
-const report = path.join(dataDir, 'vitest-report.json');
+const report = path.join(dataDir, `vitest-report-${testDatabase}.json`);
 rmSync(report, { force: true });
 
 const vitest = spawnSync(

@@ -10,7 +10,8 @@ import { createDatabase } from '../../server/db/client';
 import { defaultAuthSettings } from '../../server/config/auth-settings';
 
 const root = path.resolve(import.meta.dirname, '..', '..');
-const clientDir = path.join(root, 'dist');
+// SEAMWRIGHT_DIST: another build folder, for parallel runs (scripts/lib/build-client.mjs).
+const clientDir = path.join(root, process.env.SEAMWRIGHT_DIST ?? 'dist');
 const screenshotDir = path.join(root, '.screenshots');
 const CHROMIUM = '/usr/bin/chromium';
 
