@@ -9,19 +9,29 @@ export interface DownloadedFile {
   readonly name: string;
 }
 
+/** What a recorded download names besides its request: the preset (and version) and the printer profile. */
+export interface KitOrigin {
+  readonly presetId?: string | null;
+  readonly presetVersion?: number | null;
+  readonly printerProfileId?: string | null;
+}
+
 /**
  * The kit as a zip (STL files, manifest.json, README.txt). Signed out: POST /api/kits (no account needed).
  * Signed in with a current team: POST /api/teams/:teamId/kits, which builds the same zip and records it in
- * the team's kit history (who, when, the full request), so it can be downloaded again later.
+ * the team's kit history (who, when, the full request, the preset and printer profile it came from), so it
+ * can be downloaded again later.
  */
 export async function downloadKit({
   request,
   teamId,
+  origin = {},
 }: {
   request: KitRequest;
   teamId?: string;
+  origin?: KitOrigin;
 }): Promise<DownloadedFile> {
-  const [url, body] = teamId ? [`/api/teams/${teamId}/kits`, { request }] : ['/api/kits', request];
+  const [url, body] = teamId ? [`/api/teams/${teamId}/kits`, { request, ...origin }] : ['/api/kits', request];
   let response: Response;
   try {
     response = await fetch(url, {
@@ -49,5 +59,8 @@ export async function downloadKit({
 /** The zip download as a mutation: pending while the server builds, the error in the server's words. */
 export function useDownloadKit() {
   const { team } = useCurrentTeam();
-  return useMutation({ mutationFn: (request: KitRequest) => downloadKit({ request, teamId: team?.id }) });
+  return useMutation({
+    mutationFn: ({ request, origin }: { request: KitRequest; origin?: KitOrigin }) =>
+      downloadKit({ request, teamId: team?.id, origin }),
+  });
 }

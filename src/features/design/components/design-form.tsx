@@ -1,5 +1,6 @@
 import { memo } from 'react';
 import { useWatch, type UseFormReturn } from 'react-hook-form';
+import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import type { DesignValues } from '../lib/design-values';
 import type { LengthUnit } from '../lib/units';
 import { DovetailFields } from './dovetail-fields';
@@ -11,11 +12,12 @@ import { KeyFields } from './key-fields';
 interface DesignFormProps {
   form: UseFormReturn<DesignValues>;
   unit: LengthUnit;
-  signedIn: boolean;
+  /** The current team's printer profiles; null when nobody is signed in. */
+  printerProfiles: readonly PrinterProfile[] | null;
 }
 
 /** Every setting of a kit. The preview follows each change, so the form has no submit button. */
-export const DesignForm = memo(function DesignForm({ form, unit, signedIn }: DesignFormProps) {
+export const DesignForm = memo(function DesignForm({ form, unit, printerProfiles }: DesignFormProps) {
   const { control, setValue } = form;
   const joint = useWatch({ control, name: 'joint' });
   return (
@@ -32,7 +34,7 @@ export const DesignForm = memo(function DesignForm({ form, unit, signedIn }: Des
       />
       <FaceFields control={control} unit={unit} />
       {joint === 'key' ? <KeyFields control={control} unit={unit} /> : <DovetailFields control={control} unit={unit} />}
-      <FitFields control={control} setValue={setValue} unit={unit} signedIn={signedIn} />
+      <FitFields control={control} setValue={setValue} unit={unit} printerProfiles={printerProfiles} />
     </form>
   );
 });

@@ -1,27 +1,36 @@
 import { useDeferredValue, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { kitRequestSchema, type KitRequest } from '../../../../shared/schemas/kit-request';
-import { useMe } from '../../../lib/session';
 import { usePreviewBuild } from '../hooks/use-preview-build';
 import { useUnits } from '../hooks/use-units';
+import { useDesignPresets } from '../hooks/use-design-presets';
+import type { DesignLibrary } from '../lib/design-library';
 import { DEFAULT_DESIGN, designResolver, toKitRequest, type DesignValues } from '../lib/design-values';
+import { presetText, withProfileCalibration } from '../lib/preset-values';
 import { DesignForm } from './design-form';
 import { FaceDrawing } from './face-drawing';
 import { FitExplanation } from './fit-explanation';
 import { KitDownloads } from './kit-downloads';
-import { PresetHook } from './preset-hook';
+import { PresetBar } from './preset-bar';
 import { PreviewPanel } from './preview/preview-panel';
 import { UnitSwitch } from './unit-switch';
 import { WarningsAndCautions } from './warnings-and-cautions';
 
-/** The design screen: settings on the left (on top on a phone), the kit's preview, drawing, fit and files beside them. */
-export function DesignScreen() {
-  const { data: me } = useMe();
+/**
+ * The design screen: settings on the left (on top on a phone), the kit's preview, drawing, fit and files
+ * beside them.
+ *
+ * @param library - the current team's presets and printer profiles when someone is signed in, else null
+ */
+export function DesignScreen({ library }: { library: DesignLibrary | null }) {
   const { unit, setUnit } = useUnits();
   const form = useForm<DesignValues>({ resolver: designResolver, defaultValues: DEFAULT_DESIGN, mode: 'onChange' });
   const values = useWatch({ control: form.control }) as DesignValues;
-  // Keyed on the request's text, so a re-render that changes nothing never asks for a new build.
-  const requestText = JSON.stringify(toKitRequest(values));
+  const presets = useDesignPresets(form, library);
+  const profile = library?.printerProfiles.find((p) => p.id === values.printerProfileId) ?? null;
+  // Keyed on the request's text, so a re-render that changes nothing never asks for a new build. The chosen
+  // printer profile's calibration is part of it, as in the kit the server builds.
+  const requestText = JSON.stringify(withProfileCalibration(toKitRequest(values), profile));
   const parsed = useMemo(() => kitRequestSchema.safeParse(JSON.parse(requestText)), [requestText]);
   const request = parsed.success ? parsed.data : null;
   const asSent = useMemo(
@@ -29,6 +38,8 @@ export function DesignScreen() {
     [parsed, requestText],
   );
   const preview = usePreviewBuild(request);
+  const origin = presets.origin;
+  const unchangedOrigin = origin && origin.settingsText === presetText(values) ? origin : null;
   // The 3D view gets each build at once; the drawing, fit and file list follow a moment later, so a new
   // build reaches the screen without waiting for every panel to re-render.
   const kit = useDeferredValue(preview.built?.kit ?? null);
@@ -43,21 +54,30 @@ export function DesignScreen() {
             Change any setting and the preview follows. Lengths in {unit === 'mm' ? 'millimetres' : 'inches'}.
           </p>
         </div>
-        <div className="flex flex-wrap items-center gap-4">
-          <UnitSwitch unit={unit} onChange={setUnit} />
-          <PresetHook signedIn={Boolean(me)} />
-        </div>
+        <UnitSwitch unit={unit} onChange={setUnit} />
       </header>
       <div className="grid gap-8 lg:grid-cols-[minmax(20rem,26rem)_1fr]">
-        <div className="rounded-card border border-paper-deep bg-white/50 p-4 sm:p-5">
-          <DesignForm form={form} unit={unit} signedIn={Boolean(me)} />
+        <div className="space-y-6 rounded-card border border-paper-deep bg-white/50 p-4 sm:p-5">
+          <PresetBar library={library} presets={presets} currentText={presetText(values)} invalid={!request} />
+          <DesignForm form={form} unit={unit} printerProfiles={library?.printerProfiles ?? null} />
         </div>
         <div className="min-w-0 space-y-10">
           <PreviewPanel preview={preview} unit={unit} formInvalid={!request} />
           <FaceDrawing face={request?.face ?? null} kit={kit} failure={failure?.message ?? null} unit={unit} />
           {kit && !failure && <FitExplanation manifest={kit.manifest} unit={unit} />}
           {kit && !failure && <WarningsAndCautions warnings={kit.manifest.warnings} request={kit.manifest.request} />}
-          <KitDownloads request={asSent} kit={kit} blocked={Boolean(failure)} stl={preview.stl} />
+          <KitDownloads
+            request={asSent}
+            kit={kit}
+            blocked={Boolean(failure)}
+            stl={preview.stl}
+            origin={{
+              // A download is recorded with its preset only while the design still matches that version.
+              presetId: unchangedOrigin?.id ?? null,
+              presetVersion: unchangedOrigin?.version ?? null,
+              printerProfileId: profile?.id ?? null,
+            }}
+          />
         </div>
       </div>
     </div>

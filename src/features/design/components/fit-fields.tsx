@@ -2,10 +2,12 @@ import { Link } from 'react-router-dom';
 import { useWatch, type Control, type UseFormSetValue } from 'react-hook-form';
 import { defaultProcessFor } from '../../../../shared/fit/default-process-for';
 import { materialSchema, type Material } from '../../../../shared/schemas/joint-options';
+import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import type { DesignValues } from '../lib/design-values';
 import type { LengthUnit } from '../lib/units';
 import { ChoiceField } from './form/choice-field';
 import { NumberField } from './form/number-field';
+import { PrinterField } from './printer-field';
 import { SelectField } from './form/select-field';
 
 const materialNames: Record<Material, string> = {
@@ -29,13 +31,16 @@ interface FitFieldsProps {
   control: Control<DesignValues>;
   setValue: UseFormSetValue<DesignValues>;
   unit: LengthUnit;
-  signedIn: boolean;
+  /** The current team's printer profiles; null when nobody is signed in. */
+  printerProfiles: readonly PrinterProfile[] | null;
 }
 
 /** Printing process, material, fit class and clearance (derived by the fit engine, or the maker's own). */
-export function FitFields({ control, setValue, unit, signedIn }: FitFieldsProps) {
-  const process = useWatch({ control, name: 'process' });
-  const clearanceMode = useWatch({ control, name: 'clearanceMode' });
+export function FitFields({ control, setValue, unit, printerProfiles }: FitFieldsProps) {
+  const [process, clearanceMode, printerProfileId] = useWatch({
+    control,
+    name: ['process', 'clearanceMode', 'printerProfileId'],
+  });
   const materials = materialSchema.options
     .filter((m) => defaultProcessFor(m) === process)
     .map((m) => ({ value: m, label: materialNames[m] }));
@@ -51,7 +56,11 @@ export function FitFields({ control, setValue, unit, signedIn }: FitFieldsProps)
             { value: 'fdm', label: 'Filament (FDM)' },
             { value: 'resin', label: 'Resin' },
           ]}
-          onPicked={(p) => setValue('material', p === 'resin' ? 'resin-standard' : 'PLA', { shouldValidate: true })}
+          onPicked={(p) => {
+            setValue('material', p === 'resin' ? 'resin-standard' : 'PLA', { shouldValidate: true });
+            // A profile prints one process; its calibration means nothing for the other.
+            setValue('printerProfileId', '', { shouldValidate: true });
+          }}
         />
         <SelectField control={control} name="material" label="Material" options={materials} />
       </div>
@@ -75,32 +84,25 @@ export function FitFields({ control, setValue, unit, signedIn }: FitFieldsProps)
           hint="Gap between key and pocket wall on each side."
         />
       )}
-      <NumberField
-        control={control}
-        name="calibrationOffset"
-        label="Printer correction (optional)"
-        unit={unit}
-        placeholder="none"
-        hint="From your printer’s fit test: positive if test keys came out tight, negative if loose."
-      />
-      <p className="text-sm text-ink-soft">
-        {signedIn ? (
-          <>
-            Saved printer profiles live under{' '}
-            <Link to="/printer-profiles" className="font-medium text-ink underline underline-offset-4">
-              printer profiles
-            </Link>
-            .
-          </>
-        ) : (
-          <>
-            <Link to="/sign-in" className="font-medium text-ink underline underline-offset-4">
-              Sign in
-            </Link>{' '}
-            to keep printer profiles with your fit-test numbers.
-          </>
-        )}
-      </p>
+      {printerProfiles && <PrinterField control={control} profiles={printerProfiles} unit={unit} />}
+      {!printerProfileId && (
+        <NumberField
+          control={control}
+          name="calibrationOffset"
+          label="Printer correction (optional)"
+          unit={unit}
+          placeholder="none"
+          hint="From your printer’s fit test: positive if test keys came out tight, negative if loose."
+        />
+      )}
+      {!printerProfiles && (
+        <p className="text-sm text-ink-soft">
+          <Link to="/sign-in" className="font-medium text-ink underline underline-offset-4">
+            Sign in
+          </Link>{' '}
+          to keep printer profiles with your fit-test numbers.
+        </p>
+      )}
     </fieldset>
   );
 }

@@ -2,7 +2,7 @@ import { useState, memo } from 'react';
 import type { KitRequest } from '../../../../shared/schemas/kit-request';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
-import { useDownloadKit } from '../api/download-kit';
+import { useDownloadKit, type KitOrigin } from '../api/download-kit';
 import { useCurrentTeam } from '../../../lib/session';
 import type { PreviewKit } from '../lib/preview-kit';
 import { saveFile } from '../lib/save-file';
@@ -25,10 +25,12 @@ interface KitDownloadsProps {
   /** The newest build failed: nothing to download until it is fixed. */
   blocked: boolean;
   stl: (file: string) => Promise<Uint8Array>;
+  /** The preset and printer profile a signed-in download is recorded with. */
+  origin?: KitOrigin;
 }
 
 /** What is in the kit, file by file, and the downloads: the whole zip from the server, or one STL. */
-export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, stl }: KitDownloadsProps) {
+export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, stl, origin }: KitDownloadsProps) {
   const zip = useDownloadKit();
   const { team } = useCurrentTeam();
   const [partError, setPartError] = useState<string | null>(null);
@@ -87,7 +89,9 @@ export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, 
           {partError && <Notice tone="error">{partError}</Notice>}
           {zip.isError && <Notice tone="error">{zip.error.message}</Notice>}
           <Button
-            onClick={() => request && zip.mutate(request, { onSuccess: (file) => saveFile(file.blob, file.name) })}
+            onClick={() =>
+              request && zip.mutate({ request, origin }, { onSuccess: (file) => saveFile(file.blob, file.name) })
+            }
             disabled={zip.isPending}
             className="w-full py-3 text-lead sm:w-auto"
           >

@@ -21,6 +21,11 @@ export interface DesignValues {
   clearanceMode: 'derived' | 'set';
   clearance?: number;
   calibrationOffset?: number;
+  /** A printer profile of the current team whose calibration replaces the typed correction; '' for none. */
+  printerProfileId: string;
+  /** Kept from a preset so that saving it again changes nothing the form does not show. */
+  format?: KitRequest['format'];
+  chordTolerance?: number;
   face: { shape: Face['shape']; width?: number; height?: number; diameter?: number; points?: Array<[number, number]> };
   key: z.input<typeof keyOptionsSchema>;
   dovetail: z.input<typeof dovetailOptionsSchema>;
@@ -34,6 +39,7 @@ export const DEFAULT_DESIGN: DesignValues = {
   fit: 'snug',
   clearanceMode: 'derived',
   clearance: 0.15,
+  printerProfileId: '',
   face: {
     shape: 'rect',
     width: 80,
@@ -82,7 +88,10 @@ export function toKitRequest(v: DesignValues): KitRequest {
     material: v.material,
     fit: v.fit,
     clearance: v.clearanceMode === 'set' ? v.clearance : undefined,
-    calibrationOffset: v.calibrationOffset,
+    // With a printer profile chosen, its calibration entry is applied afterwards (see withProfileCalibration).
+    calibrationOffset: v.printerProfileId ? undefined : v.calibrationOffset,
+    format: v.format,
+    chordTolerance: v.chordTolerance,
     face: faceOf(v.face),
   });
   const request =

@@ -1,0 +1,75 @@
+import { useCallback, useState } from 'react';
+import type { UseFormReturn } from 'react-hook-form';
+import type { Preset } from '../../../../shared/schemas/preset';
+import type { DesignLibrary, PresetOrigin } from '../lib/design-library';
+import { toKitRequest, type DesignValues } from '../lib/design-values';
+import { presetText, settingsOf, valuesFromPreset } from '../lib/preset-values';
+
+/** What saving the design as the next version of its preset ended in. */
+export type VersionSave = { kind: 'saved'; preset: Preset } | { kind: 'conflict'; current: Preset };
+
+const originOf = (preset: Preset, values: DesignValues): PresetOrigin => ({
+  id: preset.id,
+  name: preset.name,
+  version: preset.version,
+  settingsText: presetText(values),
+});
+
+const bodyOf = (values: DesignValues) => ({
+  settings: settingsOf(toKitRequest(values)),
+  printerProfileId: values.printerProfileId || null,
+});
+
+/**
+ * Presets on the design screen: load one into the form (the face stays), save the design as a new preset,
+ * or save it as the next version of the preset it came from. The origin remembers which preset and version
+ * the design came from, so downloads are recorded with it and a stale save is caught (409) instead of
+ * overwriting someone else's version.
+ */
+export function useDesignPresets(form: UseFormReturn<DesignValues>, library: DesignLibrary | null) {
+  const [origin, setOrigin] = useState<PresetOrigin | null>(null);
+
+  const apply = useCallback(
+    (preset: Preset) => {
+      const values = valuesFromPreset(form.getValues(), preset, library?.printerProfiles ?? []);
+      form.reset(values);
+      setOrigin(originOf(preset, values));
+    },
+    [form, library],
+  );
+
+  const load = useCallback(
+    async (id: string) => {
+      if (!library) throw new Error('Sign in to use your team’s presets.');
+      apply(await library.loadPreset(id));
+    },
+    [library, apply],
+  );
+
+  const saveNew = useCallback(
+    async (fields: { name: string; description?: string }) => {
+      if (!library) throw new Error('Sign in to save presets.');
+      const values = form.getValues();
+      const preset = await library.createPreset({ ...fields, ...bodyOf(values) });
+      setOrigin(originOf(preset, values));
+      return preset;
+    },
+    [library, form],
+  );
+
+  /** Saves over `baseVersion` (the origin's version, or the newer one a conflict showed). */
+  const saveVersion = useCallback(
+    async (baseVersion: number): Promise<VersionSave> => {
+      if (!library || !origin) throw new Error('Load a preset first.');
+      const values = form.getValues();
+      const result = await library.updatePreset(origin.id, { baseVersion, ...bodyOf(values) });
+      if ('conflict' in result) return { kind: 'conflict', current: result.conflict };
+      setOrigin(originOf(result.saved, values));
+      return { kind: 'saved', preset: result.saved };
+    },
+    [library, origin, form],
+  );
+
+  const forget = useCallback(() => setOrigin(null), []);
+  return { origin, load, apply, saveNew, saveVersion, forget };
+}

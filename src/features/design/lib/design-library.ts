@@ -1,0 +1,38 @@
+import type { Preset, PresetInput, PresetPatch } from '../../../../shared/schemas/preset';
+import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
+
+/** A preset as the design screen lists it. */
+export interface PresetChoice {
+  readonly id: string;
+  readonly name: string;
+  readonly version: number;
+}
+
+/**
+ * What the design screen may use of the team library when someone is signed in: the current team's
+ * presets and printer profiles, and the calls that load and save presets. The app's route builds it from
+ * the presets and printer-profiles features, so the design feature does not import them.
+ */
+export interface DesignLibrary {
+  readonly teamId: string;
+  readonly teamName: string;
+  /** Editors and owners save presets; viewers only start from them. */
+  readonly canEdit: boolean;
+  readonly presets: readonly PresetChoice[];
+  readonly printerProfiles: readonly PrinterProfile[];
+  loadPreset(id: string): Promise<Preset>;
+  createPreset(body: PresetInput): Promise<Preset>;
+  /** The saved preset, or, when the save was based on an older version (409), the preset as it is now. */
+  updatePreset(id: string, patch: PresetPatch): Promise<{ saved: Preset } | { conflict: Preset }>;
+}
+
+/**
+ * The preset the design on screen came from, and its settings as they were when it was loaded or saved
+ * (`settingsText`), so the screen can tell whether the design still matches it.
+ */
+export interface PresetOrigin {
+  readonly id: string;
+  readonly name: string;
+  readonly version: number;
+  readonly settingsText: string;
+}
