@@ -2,7 +2,7 @@ import type { FitClass, Material, Process } from '../schemas/joint-options';
 import { clearanceDefaults } from './clearance-defaults';
 import { formatMm } from './format-mm';
 import { formatRange } from './format-range';
-import { materialAdjustments } from './material-adjustments';
+import { materialStep, type MaterialTuningInput } from './material-step';
 
 /** One step of a clearance derivation: what it is, how many mm per side it adds, where it comes from. */
 export interface ClearanceStep {
@@ -20,11 +20,13 @@ export interface WordedStep {
 
 /**
  * The steps from the defaults to a clearance, without the final floor at 0 mm: the published default for
- * the process and fit class, the material adjustment when it is not 0, the calibration offset when given.
+ * the process and fit class, the material adjustment (a team material's when `materialTuning` is given, named
+ * even at 0; the built-in material's when it is not 0), the calibration offset when given.
  *
- * @param input - process (already defaulted), material, fit, optional calibration offset (mm per side) and source
+ * @param input - process (already defaulted), material, fit, optional team material tuning (mm per side),
+ *   optional calibration offset (mm per side) and source
  * @returns the steps in order, each with its words; their `mm` add up to the clearance
- * @throws RangeError for an unknown process, fit or material, or a calibration offset that is not finite
+ * @throws RangeError for an unknown process, fit or material, or an adjustment or offset that is not finite
  * @example
  * defaultClearanceSteps({ process: 'fdm', material: 'PLA', fit: 'slide' });
  * // [{ step: { label: 'slide fit default on FDM', mm: 0.25, source: … }, words: '0.25 mm from the published 0.2–0.3 mm range' }]
@@ -33,14 +35,14 @@ export function defaultClearanceSteps(input: {
   readonly process: Process;
   readonly material: Material;
   readonly fit: FitClass;
+  readonly materialTuning?: MaterialTuningInput;
   readonly calibrationOffset?: number;
   readonly calibrationSource?: string;
 }): WordedStep[] {
   const base = clearanceDefaults[input.process]?.[input.fit];
-  const adjustment = materialAdjustments[input.material];
-  // The types already rule these out; the checks are for callers that skipped the schema.
+  // The types already rule this out; the check is for callers that skipped the schema.
   if (!base) throw new RangeError(`no default clearance for a ${input.fit} fit on ${input.process}`);
-  if (!adjustment) throw new RangeError(`unknown material ${input.material}`);
+  const material = materialStep(input.material, input.materialTuning);
 
   const range = formatRange(base.range);
   const steps: WordedStep[] = [
@@ -54,12 +56,7 @@ export function defaultClearanceSteps(input: {
       words: `${formatMm(base.mm)} from ${range}`,
     },
   ];
-  if (adjustment.mm !== 0) {
-    steps.push({
-      step: { label: `for ${input.material}`, mm: adjustment.mm, source: adjustment.source },
-      words: `${formatMm(adjustment.mm, true)} for ${input.material}`,
-    });
-  }
+  if (material) steps.push(material);
   const offset = input.calibrationOffset;
   if (offset !== undefined) {
     if (!Number.isFinite(offset)) {

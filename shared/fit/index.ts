@@ -3,6 +3,7 @@
 
 export { resolveClearance, type ClearanceInput, type ClearanceResult } from './resolve-clearance';
 export type { ClearanceStep } from './default-clearance-steps';
+export type { MaterialTuningInput } from './material-step';
 export { defaultProcessFor } from './default-process-for';
 export { materialMatchesProcess } from './material-matches-process';
 export { keyScaleForClearance } from './key-scale-for-clearance';

@@ -6,6 +6,7 @@ import { describeFit } from './describe-fit';
 import { explicitClearance } from './explicit-clearance';
 import { formatMm } from './format-mm';
 import { materialMatchesProcess } from './material-matches-process';
+import type { MaterialTuningInput } from './material-step';
 import { roundTo } from './round-to';
 
 /** What the fit engine needs to choose a clearance. Lengths in mm per side. */
@@ -14,6 +15,11 @@ export interface ClearanceInput {
   readonly process?: Process;
   readonly material: Material;
   readonly fit: FitClass;
+  /**
+   * A team material chosen for the joint, a variant of `material`: its clearance adjustment (mm per side, may
+   * be negative) replaces the built-in material's, and its name appears in the derivation. Default none.
+   */
+  readonly materialTuning?: MaterialTuningInput;
   /** mm per side from a printer profile's fit test; may be negative. Default none. */
   readonly calibrationOffset?: number;
   /** Where the offset comes from, for the derivation; default "your printer's calibration". */
@@ -36,18 +42,23 @@ export interface ClearanceResult {
 
 /**
  * Chooses the clearance per side for a joint: the published default for the process and fit class, plus a
- * per-material adjustment, plus the printer's calibration offset, floored at 0 mm. An explicit clearance
- * replaces all of that.
+ * per-material adjustment (the team material's when `materialTuning` is given, else the built-in material's),
+ * plus the printer's calibration offset, floored at 0 mm. An explicit clearance replaces all of that.
  *
  * @param input - see {@link ClearanceInput}; only `material` and `fit` are required
  * @returns the clearance per side in mm (0.001 mm steps), its derivation in words and as steps, and warnings
  *   (below 0.05 mm on FDM, above 0.5 mm, no gap at all, a material that does not match the process)
- * @throws RangeError for a non-finite offset, or an explicit clearance that is negative or not finite
+ * @throws RangeError for a non-finite offset or tuning adjustment, or an explicit clearance that is negative or
+ *   not finite
  * @example
  * resolveClearance({ material: 'PETG', fit: 'snug', calibrationOffset: -0.03,
  *   calibrationSource: "your printer's fit test" }).derivation;
  * // "0.15 mm: snug fit in PETG on FDM, 0.16 mm from the published 0.1–0.3 mm range, +0.02 mm for PETG,
  * //  your printer's fit test −0.03 mm"
+ * resolveClearance({ material: 'PLA', fit: 'snug',
+ *   materialTuning: { name: 'Grey matte PLA', clearanceAdjustment: 0.03 } }).derivation;
+ * // "0.19 mm: snug fit in PLA on FDM, 0.16 mm from the published 0.1–0.3 mm range,
+ * //  +0.03 mm for Grey matte PLA (a team material based on PLA)"
  */
 export function resolveClearance(input: ClearanceInput): ClearanceResult {
   const process = input.process ?? defaultProcessFor(input.material);

@@ -26,8 +26,16 @@ const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
  */
 export function dovetailKitPlan(request: ResolvedDovetailKitRequest): KitPlan {
   const d = request.dovetail;
-  const { process, material, fit: fitClass, calibrationOffset, calibrationSource, clearance } = request;
-  const fit = resolveClearance({ process, material, fit: fitClass, calibrationOffset, calibrationSource, clearance });
+  const { process, material, fit: fitClass, materialTuning, calibrationOffset, calibrationSource, clearance } = request;
+  const fit = resolveClearance({
+    process,
+    material,
+    fit: fitClass,
+    materialTuning,
+    calibrationOffset,
+    calibrationSource,
+    clearance,
+  });
   const c = fit.clearancePerSide;
   const section: DovetailSectionParams = {
     rootWidth: d.rootWidth,

@@ -31,8 +31,16 @@ export interface KeyKitFit {
  * // { clearancePerSide: 0.05, keyScale: 0.99, pocketGrowth: 0, … }
  */
 export function keyKitFit(request: ResolvedKeyKitRequest): KeyKitFit {
-  const { process, material, fit, calibrationOffset, calibrationSource, clearance } = request;
-  const resolved = resolveClearance({ process, material, fit, calibrationOffset, calibrationSource, clearance });
+  const { process, material, fit, materialTuning, calibrationOffset, calibrationSource, clearance } = request;
+  const resolved = resolveClearance({
+    process,
+    material,
+    fit,
+    materialTuning,
+    calibrationOffset,
+    calibrationSource,
+    clearance,
+  });
   const k = request.key;
   const common = { derivation: resolved.derivation, steps: resolved.steps, warnings: resolved.warnings };
   if (k.strategy !== 'scale') {

@@ -6,8 +6,11 @@ import { listQueryFields, pageOf, queryId } from './library-list';
 
 /**
  * `POST /api/teams/:teamId/kits` body: the full kit request, and optionally the preset it came from (its
- * current version unless `presetVersion` says which) and the printer profile whose calibration the fit
- * engine should use (default: the preset's printer profile).
+ * current version unless `presetVersion` says which), the printer profile whose calibration the fit
+ * engine should use (default: the preset's printer profile), and the team material the kit is printed in
+ * (`teamMaterialId`, default none): one of this team's materials whose base material is the request's
+ * `material`; its clearance adjustment for the request's fit class replaces the built-in material's (the
+ * server sets the request's `materialTuning` from it).
  */
 export const recordKitSchema = z.object({
   request: kitRequestSchema,
@@ -18,6 +21,10 @@ export const recordKitSchema = z.object({
   presetVersion: z.number().int().min(1).nullable().default(null),
   printerProfileId: z
     .uuid({ error: () => 'printerProfileId must be the id of a printer profile' })
+    .nullable()
+    .default(null),
+  teamMaterialId: z
+    .uuid({ error: () => 'teamMaterialId must be the id of a team material' })
     .nullable()
     .default(null),
 });
@@ -38,6 +45,11 @@ export const kitSummarySchema = z.object({
   keyScale: z.number().optional(),
   /** How the clearance was reached, naming the printer profile whose calibration was used. */
   derivation: z.string(),
+  /**
+   * The team material the kit was printed in, when one was chosen: its id (null when the request itself
+   * carried the tuning), name and clearance adjustment in mm per side. Absent for kits without one.
+   */
+  teamMaterial: z.object({ id: z.string().nullable(), name: z.string(), clearanceAdjustment: z.number() }).optional(),
   warnings: z.array(z.string()),
   parts: z.array(
     z.object({

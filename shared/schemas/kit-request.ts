@@ -10,6 +10,31 @@ import { mmField } from './kit-number-fields';
 /** Default largest chord deviation of round shapes, mm (issue 3). */
 export const DEFAULT_CHORD_TOLERANCE_MM = 0.02;
 
+/**
+ * A team material chosen for a kit (issue 5): its name, for the derivation, and its clearance adjustment for
+ * the request's fit class in mm per side (±0.5), which replaces the built-in material's adjustment. The team
+ * material is a variant of the request's `material` (its base material).
+ *
+ * @example
+ * materialTuningSchema.parse({ name: ' Grey matte PLA ', clearanceAdjustment: 0.03 }).name; // "Grey matte PLA"
+ */
+export const materialTuningSchema = z.object(
+  {
+    name: z
+      .string({ error: () => 'materialTuning name must be text: the name of a team material' })
+      .trim()
+      .min(1, { error: () => 'materialTuning name must not be empty: give the team material’s name' })
+      .max(80, {
+        error: (iss) =>
+          `materialTuning name must be at most 80 characters; it has ${String((iss.input as string).length)}`,
+      }),
+    clearanceAdjustment: mmField('materialTuning clearance adjustment', { min: -0.5, max: 0.5 }),
+  },
+  { error: () => 'materialTuning must be an object with a name and a clearanceAdjustment in mm' },
+);
+/** A team material's tuning as a kit request carries it. */
+export type MaterialTuning = z.output<typeof materialTuningSchema>;
+
 const sharedFields = {
   process: processSchema.optional(),
   material: materialSchema,
@@ -23,6 +48,7 @@ const sharedFields = {
     .min(1)
     .max(200, { error: () => 'calibrationSource must be at most 200 characters' })
     .optional(),
+  materialTuning: materialTuningSchema.optional(),
   face: faceSchema,
   format: z.enum(['binary', 'ascii'], { error: () => 'format must be "binary" or "ascii"' }).default('binary'),
   chordTolerance: mmField('chord tolerance', { min: 0.001, max: 0.5 }).default(DEFAULT_CHORD_TOLERANCE_MM),
@@ -41,6 +67,9 @@ const dovetailKitSchema = z.object({ joint: z.literal('dovetail'), ...sharedFiel
  *   go with the process is rejected.
  * - `clearance` (mm per side, 0–1) replaces the fit engine's choice; `calibrationOffset` (mm, ±0.5) is the
  *   printer's fit-test correction and `calibrationSource` (text, ≤ 200) says whose, for the derivation.
+ * - `materialTuning` `{ name, clearanceAdjustment }`: a team material chosen for this kit, a variant of
+ *   `material`. `name` (trimmed, 1–80 characters) is the team material's name, for the derivation;
+ *   `clearanceAdjustment` (mm per side, ±0.5) replaces the built-in material's adjustment for this fit class.
  * - `format`: STL "binary" (default) or "ascii". `chordTolerance`: largest chord deviation of round shapes,
  *   default 0.02 mm (0.001–0.5).
  *

@@ -11,7 +11,9 @@ import { kitFileName } from '../kits/kits.service';
 import { findPreset } from '../presets/presets.repository';
 import { findVersion } from '../presets/preset-versions.repository';
 import { findProfile } from '../printer-profiles/printer-profiles.repository';
+import { findMaterial } from '../materials/materials.repository';
 import { applyCalibration, namedDerivation, type CalibratedRequest } from './kit-calibration';
+import { applyTeamMaterial } from './kit-material';
 import { stlHashes, zipKit } from './kit-bytes';
 import { ENGINE_VERSION } from './engine-version';
 import { insertKitDownload } from './kit-history.repository';
@@ -21,9 +23,18 @@ const notOurs = (path: string, what: string) =>
     { path, message: `Choose one of this team’s ${what}s, or none.` },
   ]);
 
-/** The manifest summary the history keeps (the full manifest stays inside the original zip). */
-export function summaryOf(manifest: KitManifest, calibration: CalibratedRequest['calibration']): KitSummary {
+/**
+ * The manifest summary the history keeps (the full manifest stays inside the original zip).
+ *
+ * @param teamMaterialId - the team material chosen with the kit, null when the request carried its own tuning
+ */
+export function summaryOf(
+  manifest: KitManifest,
+  calibration: CalibratedRequest['calibration'],
+  teamMaterialId: string | null = null,
+): KitSummary {
   const r = manifest.request;
+  const tuning = r.materialTuning;
   return {
     joint: r.joint,
     process: r.process,
@@ -32,6 +43,7 @@ export function summaryOf(manifest: KitManifest, calibration: CalibratedRequest[
     clearancePerSide: manifest.clearancePerSide,
     ...(manifest.keyScale !== undefined ? { keyScale: manifest.keyScale } : {}),
     derivation: namedDerivation(manifest.fit.derivation, calibration),
+    ...(tuning ? { teamMaterial: { id: teamMaterialId, ...tuning } } : {}),
     warnings: manifest.warnings,
     parts: manifest.parts.map(({ file, role, half, quantity, triangles, volumeMm3 }) => ({
       file,
@@ -57,10 +69,23 @@ async function presetOf(db: Executor, teamId: string, input: ParsedRecordKitInpu
   return { id: preset.id, name: preset.name, version, printerProfileId: preset.printerProfileId };
 }
 
+// Another team's material, or an unknown id, is not found: its existence elsewhere is none of this team's business.
+async function teamMaterialOf(db: Executor, teamId: string, id: string | null) {
+  if (!id) return null;
+  const material = await findMaterial(db, teamId, id);
+  if (!material) {
+    throw new AppError('NOT_FOUND', 'There is no such material in this team.', [
+      { path: 'teamMaterialId', message: 'Choose one of this team’s materials, or none.' },
+    ]);
+  }
+  return material;
+}
+
 /**
  * Builds a kit for a signed-in member and records it in the team's history: who, when, the full request,
- * the preset and version, the printer profile whose calibration the fit engine used, the manifest summary,
- * a SHA-256 per STL and the zip itself. Any member may (viewers download kits too).
+ * the preset and version, the printer profile whose calibration the fit engine used, the team material it is
+ * printed in (as the request's `materialTuning` and in the summary), the manifest summary, a SHA-256 per STL
+ * and the zip itself. Any member may (viewers download kits too).
  *
  * @param db - the database, or the seed's transaction
  * @returns the history id, the download name and the zip
@@ -74,7 +99,8 @@ export async function recordKit(db: Executor, user: SessionUser, teamId: string,
     profile = await findProfile(db, teamId, profileId);
     if (!profile) throw notOurs('printerProfileId', 'printer profile');
   }
-  const calibrated = applyCalibration(input.request, profile);
+  const teamMaterial = await teamMaterialOf(db, teamId, input.teamMaterialId);
+  const calibrated = applyCalibration(applyTeamMaterial(input.request, teamMaterial), profile);
   const calibration = calibrated.calibration;
   // Parsed once more so the keys come in the schema's order: jsonb keeps no key order, and a rebuild from the
   // stored request must write the very same manifest.json (a resolved request parses again to itself).
@@ -93,7 +119,7 @@ export async function recordKit(db: Executor, user: SessionUser, teamId: string,
     printerProfileName: profile?.name ?? null,
     calibration,
     request: request as Record<string, unknown>,
-    summary: summaryOf(kit.manifest, calibration),
+    summary: summaryOf(kit.manifest, calibration, teamMaterial?.id ?? null),
     files: stlHashes(kit.files),
     fileName,
     engineVersion: ENGINE_VERSION,

@@ -1,85 +1,58 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
-import { useForm, type Resolver } from 'react-hook-form';
-import { materialSchema } from '../../../../shared/schemas/joint-options';
-import {
-  teamMaterialInputSchema,
-  type TeamMaterial,
-  type TeamMaterialInput,
-} from '../../../../shared/schemas/material';
+import type { TeamMaterial } from '../../../../shared/schemas/material';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn, type ListView } from '../../../components/ui/data-table';
 import { Notice } from '../../../components/ui/notice';
-import { TextField } from '../../../components/ui/text-field';
-import { showApiError } from '../../../lib/form-errors';
 import { useCreateMaterial, useDeleteMaterial, useTeamMaterials } from '../api/materials';
+import { useUpdateMaterial } from '../api/update-material';
+import { materialChanges, materialFormValues } from '../lib/material-changes';
+import { MaterialForm, NEW_MATERIAL } from './material-form';
 
-const num = { setValueAs: (v: unknown) => (v === '' || v === null ? null : Number(v)) };
-
-function MaterialForm({ teamId }: { teamId: string }) {
+function AddMaterial({ teamId }: { teamId: string }) {
   const create = useCreateMaterial(teamId);
-  const { register, handleSubmit, setError, reset, formState } = useForm<TeamMaterialInput>({
-    resolver: zodResolver(teamMaterialInputSchema) as unknown as Resolver<TeamMaterialInput>,
-    defaultValues: {
-      name: '',
-      baseMaterial: 'PLA',
-      shrinkagePercent: null,
-      clearanceAdjustments: { press: 0, snug: 0, slide: 0 },
-      notes: '',
-    },
-  });
-  const { errors, isSubmitting } = formState;
-  const submit = handleSubmit(async (values) => {
-    try {
-      await create.mutateAsync(values);
-      reset();
-    } catch (error) {
-      showApiError(error, setError, ['name', 'shrinkagePercent']);
-    }
-  });
   return (
-    <form onSubmit={submit} noValidate className="grid max-w-3xl gap-3 sm:grid-cols-2">
-      {errors.root?.message && (
-        <div className="sm:col-span-2">
-          <Notice tone="error">{errors.root.message}</Notice>
-        </div>
-      )}
-      <TextField label="Name" registration={register('name')} error={errors.name} />
-      <label className="flex flex-col gap-1">
-        <span className="font-medium">Base material</span>
-        <select className="rounded-md border border-ink-faint bg-white px-3 py-2" {...register('baseMaterial')}>
-          {materialSchema.options.map((m) => (
-            <option key={m}>{m}</option>
-          ))}
-        </select>
-      </label>
-      <TextField
-        label="Shrinkage, % (empty: the base’s)"
-        type="number"
-        step="any"
-        registration={register('shrinkagePercent', num)}
-        error={errors.shrinkagePercent}
+    <section aria-labelledby="add-material" className="space-y-2">
+      <h3 id="add-material" className="font-bold">
+        Add a material
+      </h3>
+      <MaterialForm
+        values={NEW_MATERIAL}
+        submitLabel="Add material"
+        clearAfterSave
+        onSave={async (values) => {
+          await create.mutateAsync(values);
+        }}
       />
-      {(['press', 'snug', 'slide'] as const).map((fit) => (
-        <TextField
-          key={fit}
-          label={`${fit} clearance adjustment, mm`}
-          type="number"
-          step="0.01"
-          registration={register(`clearanceAdjustments.${fit}`, num)}
-          error={errors.clearanceAdjustments?.[fit]}
-        />
-      ))}
-      <div className="sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          Add material
-        </Button>
-      </div>
-    </form>
+    </section>
   );
 }
 
-/** The team's own materials: a table with search, base filter and pages, and a form to add one. */
+function EditMaterial({ teamId, material, onDone }: { teamId: string; material: TeamMaterial; onDone: () => void }) {
+  const update = useUpdateMaterial(teamId);
+  return (
+    <section aria-labelledby="edit-material" className="space-y-2">
+      <h3 id="edit-material" className="font-bold">
+        Edit “{material.name}”
+      </h3>
+      <MaterialForm
+        values={materialFormValues(material)}
+        submitLabel="Save changes"
+        focusName
+        onCancel={onDone}
+        onSave={async (values) => {
+          const patch = materialChanges(material, values);
+          if (Object.keys(patch).length > 0) await update.mutateAsync({ id: material.id, patch });
+          onDone();
+        }}
+      />
+    </section>
+  );
+}
+
+/**
+ * The team's own materials: a table with search and pages; editors and owners add and edit them, owners
+ * delete them. Says how the fit engine uses a team material.
+ */
 export function TeamMaterials({
   teamId,
   canEdit,
@@ -93,6 +66,7 @@ export function TeamMaterials({
   const [q, setQ] = useState('');
   const { data, isPending, error } = useTeamMaterials(teamId, { ...view, sort: view.sort as 'name', q });
   const remove = useDeleteMaterial(teamId);
+  const [editing, setEditing] = useState<TeamMaterial | null>(null);
   const columns = useMemo<DataTableColumn<TeamMaterial>[]>(
     () => [
       { id: 'name', accessorKey: 'name', header: 'Name' },
@@ -123,21 +97,39 @@ export function TeamMaterials({
         id: 'actions',
         header: () => <span className="sr-only">Actions</span>,
         enableSorting: false,
-        cell: ({ row }) =>
-          canDelete && (
-            <Button
-              variant="danger"
-              onClick={() => window.confirm(`Delete "${row.original.name}"?`) && remove.mutate(row.original.id)}
-            >
-              Delete
-            </Button>
-          ),
+        cell: ({ row }) => (
+          <div className="flex gap-2">
+            {canEdit && (
+              <Button variant="quiet" onClick={() => setEditing(row.original)}>
+                Edit<span className="sr-only"> {row.original.name}</span>
+              </Button>
+            )}
+            {canDelete && (
+              <Button
+                variant="danger"
+                onClick={() => {
+                  if (!window.confirm(`Delete "${row.original.name}"?`)) return;
+                  // A material deleted while its edit form is open has nothing left to save.
+                  setEditing((open) => (open?.id === row.original.id ? null : open));
+                  remove.mutate(row.original.id);
+                }}
+              >
+                Delete<span className="sr-only"> {row.original.name}</span>
+              </Button>
+            )}
+          </div>
+        ),
       },
     ],
-    [canDelete, remove],
+    [canEdit, canDelete, remove],
   );
   return (
     <div className="space-y-4">
+      <p className="max-w-3xl text-ink-soft">
+        A team material is a variant of a built-in one: a particular spool or resin your studio prints with. When
+        someone chooses it on the design screen, the fit engine uses its clearance adjustment for the kit’s fit class in
+        place of the base material’s, and the kit’s fit derivation names it.
+      </p>
       <input
         className="rounded-md border border-ink-faint bg-white px-3 py-2"
         type="search"
@@ -162,7 +154,10 @@ export function TeamMaterials({
         rowKey={(m) => m.id}
         empty={q ? 'No material matches.' : 'No team materials yet.'}
       />
-      {canEdit && <MaterialForm teamId={teamId} />}
+      {canEdit && editing && (
+        <EditMaterial key={editing.id} teamId={teamId} material={editing} onDone={() => setEditing(null)} />
+      )}
+      {canEdit && !editing && <AddMaterial teamId={teamId} />}
     </div>
   );
 }

@@ -58,4 +58,19 @@ describe('material routes', () => {
     expect((await owner.agent.delete(`${base}/materials/${created.body.id}`)).status).toBe(204);
     expect((await owner.agent.get(`${base}/materials`)).body.total).toBe(1);
   });
+
+  it('lets editors change clearance adjustments, puts bounds errors at the field and refuses viewers', async () => {
+    const { editor, viewer, base } = await libraryTeam(app, db);
+    const created = await editor.agent.post(`${base}/materials`).send({ name: 'Grey matte PLA', baseMaterial: 'PLA' });
+    const url = `${base}/materials/${created.body.id}`;
+    const edited = await editor.agent.patch(url).send({ clearanceAdjustments: { press: -0.02, snug: 0.03, slide: 0 } });
+    expect(edited.status).toBe(200);
+    expect(edited.body.clearanceAdjustments).toEqual({ press: -0.02, snug: 0.03, slide: 0 });
+    const tooMuch = await editor.agent.patch(url).send({ clearanceAdjustments: { press: 0, snug: 0.6, slide: 0 } });
+    expect(tooMuch.status).toBe(400);
+    expect(tooMuch.body.error.issues).toEqual([
+      { path: 'clearanceAdjustments.snug', message: 'snug clearance adjustment must be at most 0.5 mm; it is 0.6 mm' },
+    ]);
+    expect((await viewer.agent.patch(url).send({ notes: 'mine' })).status).toBe(403);
+  });
 });
