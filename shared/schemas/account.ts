@@ -12,6 +12,14 @@ export const meSchema = z.object({
 });
 export type Me = z.infer<typeof meSchema>;
 
+/**
+ * Units a person sees and types lengths in: millimetres or inches. Display and entry only — every
+ * stored and sent length stays in millimetres.
+ * @example unitsSchema.parse('in'); // 'in'
+ */
+export const unitsSchema = z.enum(['mm', 'in'], { error: () => 'units must be "mm" or "in"' });
+export type Units = z.infer<typeof unitsSchema>;
+
 /** `GET /api/account` reply: the account's own details, including whether the address is verified. */
 export const accountSchema = z.object({
   id: z.string(),
@@ -19,8 +27,17 @@ export const accountSchema = z.object({
   name: z.string(),
   emailVerified: z.boolean(),
   createdAt: z.string(),
+  units: unitsSchema,
 });
 export type Account = z.infer<typeof accountSchema>;
+
+/**
+ * `PATCH /api/account` body: the account's preferences (only the units so far). The reply is the
+ * whole account, as `GET /api/account` gives it.
+ * @example { units: 'in' }
+ */
+export const updateAccountSchema = z.object({ units: unitsSchema });
+export type UpdateAccountInput = z.input<typeof updateAccountSchema>;
 
 /** `POST /api/account/password` body: the current password proves it is really the owner asking. */
 export const changePasswordSchema = z.object({

@@ -2,10 +2,13 @@ import { Router } from 'express';
 import type { AppContext } from '../../app-context';
 import { requireSession, requireUser } from '../../http/current-user';
 import { parseWith } from '../../http/parse';
-import { changePasswordSchema } from '../../../shared/schemas/account';
-import { changePassword, getAccount, getMe } from './account.service';
+import { changePasswordSchema, updateAccountSchema } from '../../../shared/schemas/account';
+import { changePassword, getAccount, getMe, updateAccount } from './account.service';
 
-/** GET /api/me (fixed contract; 401 signed out) · GET /api/account · POST /api/account/password. */
+/**
+ * GET /api/me (fixed contract; 401 signed out) · GET /api/account · PATCH /api/account (units) ·
+ * POST /api/account/password.
+ */
 export function accountRoutes(ctx: AppContext): Router {
   const router = Router();
   router.get('/me', async (req, res) => {
@@ -13,6 +16,10 @@ export function accountRoutes(ctx: AppContext): Router {
   });
   router.get('/account', async (req, res) => {
     res.json(await getAccount(ctx, requireUser(req).id));
+  });
+  router.patch('/account', async (req, res) => {
+    const userId = requireUser(req).id;
+    res.json(await updateAccount(ctx, userId, parseWith(updateAccountSchema, req.body)));
   });
   router.post('/account/password', async (req, res) => {
     const auth = requireSession(req);

@@ -1,6 +1,7 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Executor } from '../../db/executor';
 import { users } from '../../db/schema';
+import type { Units } from '../../../shared/schemas/account';
 
 export interface UserRecord {
   id: string;
@@ -8,6 +9,7 @@ export interface UserRecord {
   name: string;
   passwordHash: string;
   emailVerifiedAt: Date | null;
+  units: Units;
   createdAt: Date;
 }
 
@@ -35,6 +37,12 @@ export async function insertUser(
 
 export async function setPasswordHash(db: Executor, userId: string, passwordHash: string): Promise<void> {
   await db.update(users).set({ passwordHash }).where(eq(users.id, userId));
+}
+
+/** Sets the account's units; null when there is no such user (deleted meanwhile). */
+export async function setUnits(db: Executor, userId: string, units: Units): Promise<UserRecord | null> {
+  const [row] = await db.update(users).set({ units }).where(eq(users.id, userId)).returning();
+  return row ?? null;
 }
 
 /** Marks the address verified if it is still the one the link was sent to. */

@@ -1,6 +1,7 @@
 import { useAccount } from '../../features/account/api/get-account';
 import { ChangePasswordForm } from '../../features/account/components/change-password-form';
 import { SignOutEverywhere } from '../../features/account/components/sign-out-everywhere';
+import { UnitsChoice } from '../../features/account/components/units-choice';
 import { VerifyReminder } from '../../features/auth/components/verify-reminder';
 import { Notice } from '../../components/ui/notice';
 import { RequireSignIn } from './require-sign-in';
@@ -19,6 +20,12 @@ function AccountPage() {
         </p>
       </header>
       {!account.emailVerified && <VerifyReminder email={account.email} />}
+      <section aria-labelledby="units" className="space-y-3">
+        <h2 id="units" className="text-lead font-bold">
+          Units
+        </h2>
+        <UnitsChoice />
+      </section>
       <section aria-labelledby="password" className="space-y-3">
         <h2 id="password" className="text-lead font-bold">
           Change your password
@@ -35,7 +42,7 @@ function AccountPage() {
   );
 }
 
-/** Password change and signing out everywhere. */
+/** Units for lengths, password change and signing out everywhere. */
 export function AccountRoute() {
   return (
     <RequireSignIn>

@@ -1,11 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { accountSchema } from '../../../../shared/schemas/account';
-import { apiFetch } from '../../../lib/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { accountQueryOptions } from '../../../lib/units-preference';
+
+// GET /api/account is defined in src/lib/units-preference.ts: the design screen reads the same account.
+export { accountQueryOptions, getAccount } from '../../../lib/units-preference';
 
 /** GET /api/account: the account's own details, including whether the address is confirmed. */
-export async function getAccount() {
-  return accountSchema.parse(await apiFetch('/account'));
-}
-
-export const accountQueryOptions = () => queryOptions({ queryKey: ['account'], queryFn: getAccount });
 export const useAccount = () => useQuery(accountQueryOptions());

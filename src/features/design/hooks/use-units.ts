@@ -1,5 +1,6 @@
 import { useCallback, useSyncExternalStore } from 'react';
 import { useMe } from '../../../lib/session';
+import { useUnitsPreference } from '../../../lib/units-preference';
 import type { LengthUnit } from '../lib/units';
 
 const listeners = new Set<() => void>();
@@ -8,24 +9,30 @@ const subscribe = (listener: () => void) => {
   return () => listeners.delete(listener);
 };
 
-/** The storage key of one person's unit choice; people who are not signed in share one on this browser. */
-export const unitsStorageKey = (userId: string | null) => `seamwright.units.${userId ?? 'guest'}`;
+// The choice of people who are not signed in, on this browser (the key earlier versions used for guests).
+const GUEST_KEY = 'seamwright.units.guest';
+const readGuest = () => window.localStorage.getItem(GUEST_KEY);
 
-/** Millimetres or inches for display and entry, remembered on this browser for each signed-in user. */
+/**
+ * Millimetres or inches for display and entry. Signed in, it is the account's choice (saved on the
+ * server, so every browser agrees; the screen follows a change at once). Signed out, it is remembered
+ * on this browser.
+ */
 export function useUnits(): { unit: LengthUnit; setUnit: (unit: LengthUnit) => void } {
   const { data: me } = useMe();
-  const key = unitsStorageKey(me?.user.id ?? null);
-  const stored = useSyncExternalStore(
-    subscribe,
-    () => window.localStorage.getItem(key),
-    () => null,
-  );
+  const signedIn = Boolean(me);
+  const account = useUnitsPreference(signedIn);
+  const guest = useSyncExternalStore(subscribe, readGuest, () => null);
+  const { save } = account;
   const setUnit = useCallback(
     (unit: LengthUnit) => {
-      window.localStorage.setItem(key, unit);
+      if (signedIn) return save(unit);
+      window.localStorage.setItem(GUEST_KEY, unit);
       listeners.forEach((l) => l());
     },
-    [key],
+    [signedIn, save],
   );
-  return { unit: stored === 'in' ? 'in' : 'mm', setUnit };
+  // Until the account has loaded, millimetres: the stored default of every account.
+  const chosen = signedIn ? account.units : guest;
+  return { unit: chosen === 'in' ? 'in' : 'mm', setUnit };
 }

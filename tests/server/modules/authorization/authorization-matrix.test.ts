@@ -220,6 +220,7 @@ const rows: Row[] = [
   },
   { route: 'GET /api/me', expect: signedIn(200) },
   { route: 'GET /api/account', expect: signedIn(200) },
+  { route: 'PATCH /api/account', body: () => ({ units: 'in' }), expect: signedIn(200) },
   {
     route: 'POST /api/account/password',
     body: () => ({ currentPassword: PASSWORD, newPassword: PASSWORD }),
