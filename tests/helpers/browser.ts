@@ -8,6 +8,8 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { createApp } from '../../server/app';
 import { createDatabase } from '../../server/db/client';
 import { defaultAuthSettings } from '../../server/config/auth-settings';
+import { startMailCatcher, type CapturedMail, type MailCatcher } from '../../server/mail/catcher';
+import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 
 const root = path.resolve(import.meta.dirname, '..', '..');
 // SEAMWRIGHT_DIST: another build folder, for parallel runs (scripts/lib/build-client.mjs).
@@ -36,6 +38,25 @@ export interface BrowserApp {
   readonly browser: Browser;
   /** A fresh context (own cookies and storage) at a viewport size, CSP bypassed so axe can be injected. */
   newContext(viewport?: { width: number; height: number }): Promise<BrowserContext>;
+  /** The app's sent mail, when the file asked for it with `useBrowserApp({ mail: true })`. */
+  readonly mail: BrowserMailbox;
+}
+
+/** Reads the mail the app sent to the file's own catcher. */
+export interface BrowserMailbox {
+  /** Newest first. */
+  all(): CapturedMail[];
+  /** The newest message to `to` whose subject matches, waiting for mail sent after the reply. */
+  waitFor(to: string, subject: RegExp, timeoutMs?: number): Promise<CapturedMail>;
+}
+
+/** Options of `useBrowserApp`. */
+export interface BrowserAppOptions {
+  /**
+   * Send the app's mail over SMTP to a catcher this file starts on 127.0.0.1 (a free port), readable through
+   * `app.mail` and at /api/dev/outbox. Without it mail is dropped, as before.
+   */
+  mail?: boolean;
 }
 
 /**
@@ -43,11 +64,12 @@ export interface BrowserApp {
  * Debian Chromium for the whole test file, driven by playwright-core. `npm test` builds the client and
  * installs Chromium before the suite runs.
  */
-export function useBrowserApp(): BrowserApp {
+export function useBrowserApp(options: BrowserAppOptions = {}): BrowserApp {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error('Browser tests need DATABASE_URL: run them with `npm test`.');
-  const state: { server?: Server; browser?: Browser; baseUrl: string } = { baseUrl: '' };
+  const state: { server?: Server; browser?: Browser; baseUrl: string; catcher?: MailCatcher } = { baseUrl: '' };
   const { db, pool } = createDatabase(url);
+  const messages = () => state.catcher?.messages() ?? [];
 
   beforeAll(async () => {
     if (!existsSync(path.join(clientDir, 'index.html')))
@@ -64,7 +86,10 @@ export function useBrowserApp(): BrowserApp {
       appUrl: state.baseUrl,
       rateLimits: { signIn: generous, signUp: generous, reset: generous },
     };
-    server.on('request', createApp({ db, logger: pino({ level: 'silent' }), clientDir, auth }));
+    const mailing = options.mail ? await catchingMailer() : undefined;
+    state.catcher = mailing?.catcher;
+    const mail = mailing ? { mailer: mailing.mailer, outbox: { messages } } : {};
+    server.on('request', createApp({ db, logger: pino({ level: 'silent' }), clientDir, auth, ...mail }));
     state.server = server;
     state.browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS });
   });
@@ -72,6 +97,7 @@ export function useBrowserApp(): BrowserApp {
   afterAll(async () => {
     await state.browser?.close();
     await new Promise((resolve) => (state.server ? state.server.close(resolve) : resolve(undefined)));
+    await state.catcher?.close();
     await pool.end();
   });
 
@@ -87,7 +113,41 @@ export function useBrowserApp(): BrowserApp {
       if (!state.browser) throw new Error('the browser starts in beforeAll');
       return state.browser.newContext({ viewport, bypassCSP: true, acceptDownloads: true, baseURL: state.baseUrl });
     },
+    mail: {
+      all: messages,
+      async waitFor(to, subject, timeoutMs = 10_000) {
+        if (!options.mail) throw new Error('mail is dropped: call useBrowserApp({ mail: true })');
+        const until = Date.now() + timeoutMs;
+        for (;;) {
+          const match = messages().find(
+            (m) => m.to.some((a) => a.toLowerCase() === to.toLowerCase()) && subject.test(m.subject),
+          );
+          if (match) return match;
+          if (Date.now() > until) throw new Error(`no mail to ${to} with a subject matching ${subject}`);
+          await new Promise((r) => setTimeout(r, 50));
+        }
+      },
+    },
   };
+}
+
+/** A catcher on a free loopback port and an SMTP mailer that sends to it. */
+async function catchingMailer(): Promise<{ catcher: MailCatcher; mailer: Mailer }> {
+  const catcher = await startMailCatcher();
+  const mailer = createSmtpMailer({
+    host: catcher.host,
+    port: catcher.port,
+    secure: false,
+    from: 'Seamwright <no-reply@seamwright.test>',
+  });
+  return { catcher, mailer };
+}
+
+/** The first link in a captured message that points at `path` on the app (links carry their token after #). */
+export function linkIn(mail: CapturedMail, path: string): string {
+  const match = new RegExp(`https?://[^\\s"<>]+${path}#token=[A-Za-z0-9_-]+`).exec(mail.text);
+  if (!match) throw new Error(`no ${path} link in mail "${mail.subject}"`);
+  return match[0];
 }
 
 /** Saves a full-page screenshot as .screenshots/<name>.png for a reviewer; returns the PNG bytes. */

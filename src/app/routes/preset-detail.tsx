@@ -6,6 +6,7 @@ import { usePreset } from '../../features/presets/api/get-preset';
 import { conflictOf, useUpdatePreset } from '../../features/presets/api/update-preset';
 import { ConflictNotice } from '../../features/presets/components/conflict-notice';
 import { PresetForm } from '../../features/presets/components/preset-form';
+import { PresetReadOnly } from '../../features/presets/components/preset-read-only';
 import { PresetVersions } from '../../features/presets/components/preset-versions';
 import { usePrinterChoices } from '../../features/printer-profiles/api/printer-profiles';
 import { useCurrentTeam } from '../../lib/session';
@@ -19,7 +20,7 @@ const formValues = (p: Preset) => ({
   settings: p.settings,
 });
 
-function PresetEditor({ teamId, preset, canEdit }: { teamId: string; preset: Preset; canEdit: boolean }) {
+function PresetEditor({ teamId, preset }: { teamId: string; preset: Preset }) {
   const printers = usePrinterChoices(teamId);
   const update = useUpdatePreset(teamId, preset.id);
   // The version this edit started from: a save sends it, and the server refuses it once someone saved since.
@@ -27,7 +28,10 @@ function PresetEditor({ teamId, preset, canEdit }: { teamId: string; preset: Pre
   const [pending, setPending] = useState<ParsedPresetInput | null>(null);
   const [conflict, setConflict] = useState<Preset | null>(null);
   const [saved, setSaved] = useState<number | null>(null);
+  // A failure of "save mine" other than a new conflict (network, role taken away): the form is locked, so say it here.
+  const [overwriteError, setOverwriteError] = useState<string | null>(null);
   const save = async (values: ParsedPresetInput, baseVersion: number) => {
+    setOverwriteError(null);
     try {
       const result = await update.mutateAsync({ ...values, baseVersion } as never);
       setBase(result);
@@ -46,26 +50,25 @@ function PresetEditor({ teamId, preset, canEdit }: { teamId: string; preset: Pre
       {conflict && pending && (
         <ConflictNotice
           current={conflict}
+          busy={update.isPending}
           onLoadCurrent={() => {
             setBase(conflict);
             setConflict(null);
+            setSaved(null);
           }}
-          onOverwrite={() => void save(pending, conflict.version)}
+          onOverwrite={() => save(pending, conflict.version).catch((e: Error) => setOverwriteError(e.message))}
         />
       )}
-      {canEdit ? (
-        <PresetForm
-          key={`${base.id}-${base.version}`}
-          initial={formValues(base) as never}
-          printers={printers}
-          submitLabel={`Save as version ${base.version + 1}`}
-          onSubmit={(v) => save(v, base.version)}
-        />
-      ) : (
-        <pre className="overflow-x-auto rounded-card bg-paper-deep p-4 text-sm">
-          {JSON.stringify(preset.settings, null, 2)}
-        </pre>
-      )}
+      {conflict && overwriteError && <Notice tone="error">{overwriteError}</Notice>}
+      <PresetForm
+        key={`${base.id}-${base.version}`}
+        initial={formValues(base) as never}
+        printers={printers}
+        submitLabel={`Save as version ${base.version + 1}`}
+        disabled={conflict !== null}
+        disabledReason="Choose above: load the newer version, or save yours after it."
+        onSubmit={(v) => save(v, base.version)}
+      />
     </div>
   );
 }
@@ -91,7 +94,11 @@ function PresetPage() {
           {preset.updatedBy?.name ?? 'a former member'}
         </p>
       </header>
-      <PresetEditor teamId={team.id} preset={preset} canEdit={canEdit} />
+      {canEdit ? (
+        <PresetEditor teamId={team.id} preset={preset} />
+      ) : (
+        <PresetReadOnly preset={preset} teamName={team.name} />
+      )}
       <section aria-labelledby="history" className="space-y-3">
         <h2 id="history" className="text-lead font-bold">
           Versions

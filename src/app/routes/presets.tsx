@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '../../components/ui/button';
+import { Notice } from '../../components/ui/notice';
 import { useCreatePreset } from '../../features/presets/api/create-preset';
 import { ImportPresets } from '../../features/presets/components/import-presets';
 import { PresetForm } from '../../features/presets/components/preset-form';
@@ -36,6 +37,12 @@ function PresetsPage() {
         </div>
         {canEdit && !creating && <Button onClick={() => setCreating(true)}>New preset</Button>}
       </header>
+      {!canEdit && (
+        <Notice>
+          You are a viewer of {team.name}: you can open and use these presets, but only editors and owners can add or
+          change them.
+        </Notice>
+      )}
       {creating && (
         <section aria-labelledby="new-preset" className="space-y-3">
           <h2 id="new-preset" className="text-lead font-bold">

@@ -4,12 +4,14 @@ import { Notice } from '../../../components/ui/notice';
 
 interface Props {
   current: Preset;
+  /** A save is on its way: both ways are disabled so a second click cannot send it twice. */
+  busy?: boolean;
   onLoadCurrent: () => void;
   onOverwrite: () => void;
 }
 
 /** Shown when a save was refused because someone saved a newer version meanwhile: what they saved, and the two ways on. */
-export function ConflictNotice({ current, onLoadCurrent, onOverwrite }: Props) {
+export function ConflictNotice({ current, busy = false, onLoadCurrent, onOverwrite }: Props) {
   return (
     <Notice tone="warning">
       <p className="font-medium">
@@ -19,13 +21,16 @@ export function ConflictNotice({ current, onLoadCurrent, onOverwrite }: Props) {
       <p className="mt-1 text-sm">
         Version {current.version}: “{current.name}”, {current.settings.joint}, {current.settings.material}{' '}
         {current.settings.fit}
-        {current.tags.length > 0 && `, tags ${current.tags.join(', ')}`}. The history below lists what changed.
+        {current.tags.length > 0 && `, tags ${current.tags.join(', ')}`}. The history below lists what changed. Saving
+        yours keeps version {current.version} in the history, so either can be restored later.
       </p>
       <div className="mt-3 flex flex-wrap gap-2">
-        <Button variant="quiet" onClick={onLoadCurrent}>
+        <Button variant="quiet" disabled={busy} onClick={onLoadCurrent}>
           Discard mine and load version {current.version}
         </Button>
-        <Button onClick={onOverwrite}>Save mine as version {current.version + 1}</Button>
+        <Button disabled={busy} onClick={onOverwrite}>
+          Save mine as version {current.version + 1}
+        </Button>
       </div>
     </Notice>
   );

@@ -34,7 +34,7 @@ export function PresetVersions({ teamId, presetId, currentVersion, canEdit }: Pr
                   disabled={restore.isPending}
                   onClick={() => restore.mutate({ version: v.version, baseVersion: currentVersion })}
                 >
-                  Restore as version {currentVersion + 1}
+                  Restore version {v.version} as version {currentVersion + 1}
                 </Button>
               )}
             </div>

@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import type { PresetInput } from '../../../../shared/schemas/preset';
 import { fitClassSchema, materialSchema } from '../../../../shared/schemas/joint-options';
@@ -18,10 +19,14 @@ function errorAt(form: Form, path: string): string | undefined {
 
 function NumberField({ form, path, label }: { form: Form; path: string; label: string }) {
   const message = errorAt(form, path);
+  const id = useId();
   return (
-    <label className="flex flex-col gap-1 text-sm">
-      <span className="font-medium">{label}</span>
+    <div className="flex flex-col gap-1 text-sm">
+      <label htmlFor={id} className="font-medium">
+        {label}
+      </label>
       <input
+        id={id}
         className={inputClass}
         type="number"
         step="any"
@@ -33,7 +38,7 @@ function NumberField({ form, path, label }: { form: Form; path: string; label: s
           {message}
         </span>
       )}
-    </label>
+    </div>
   );
 }
 
@@ -48,10 +53,13 @@ function Select({
   label: string;
   options: readonly string[];
 }) {
+  const id = useId();
   return (
-    <label className="flex flex-col gap-1 text-sm">
-      <span className="font-medium">{label}</span>
-      <select className={inputClass} {...form.register(path as 'name')}>
+    <div className="flex flex-col gap-1 text-sm">
+      <label htmlFor={id} className="font-medium">
+        {label}
+      </label>
+      <select id={id} className={inputClass} {...form.register(path as 'name')}>
         {options.map((o) => (
           <option key={o}>{o}</option>
         ))}
@@ -61,7 +69,7 @@ function Select({
           {errorAt(form, path)}
         </span>
       )}
-    </label>
+    </div>
   );
 }
 
