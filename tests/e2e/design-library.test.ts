@@ -1,5 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { APIRequestContext, BrowserContext, Page } from 'playwright-core';
+import type { z } from 'zod';
+import { meSchema } from '../../shared/schemas/account';
+import { teamMaterialSchema } from '../../shared/schemas/material';
+import { kitHistoryPageSchema } from '../../shared/schemas/kit-history';
+import { presetPageSchema, presetSchema } from '../../shared/schemas/preset';
+import { presetVersionListSchema } from '../../shared/schemas/preset-version';
+import { printerProfileSchema } from '../../shared/schemas/printer-profile';
 import { screenshot, seriousAxeViolations, useBrowserApp } from '../helpers/browser';
 
 // The design screen with a signed-in team: printer profiles feed the fit engine, presets load into the
@@ -16,9 +23,13 @@ async function upToDate(p: Page) {
   await p.getByTestId('preview-status').getByText('Up to date.').waitFor({ timeout: 20_000 });
 }
 
-async function json(response: Awaited<ReturnType<APIRequestContext['get']>>) {
+/** The reply, checked against the API's own schema. */
+async function json<S extends z.ZodType>(
+  schema: S,
+  response: Awaited<ReturnType<APIRequestContext['get']>>,
+): Promise<z.output<S>> {
   if (!response.ok()) throw new Error(`${response.url()} answered ${response.status()}: ${await response.text()}`);
-  return response.json();
+  return schema.parse(await response.json());
 }
 
 beforeAll(async () => {
@@ -26,11 +37,13 @@ beforeAll(async () => {
   api = context.request;
   const email = `e2e-library-${Date.now().toString(36)}@quillmoss.example`;
   await json(
+    meSchema.pick({ user: true }),
     await api.post('/api/auth/sign-up', { data: { email, password: 'birch-jig-clamp-52', name: 'Wren Calder' } }),
   );
-  teamId = (await json(await api.get('/api/me'))).teams[0].id;
+  teamId = (await json(meSchema, await api.get('/api/me'))).teams[0]!.id;
   profileId = (
     await json(
+      printerProfileSchema,
       await api.post(`/api/teams/${teamId}/printer-profiles`, {
         data: {
           name: 'Corner FDM',
@@ -45,8 +58,15 @@ beforeAll(async () => {
       }),
     )
   ).id;
+  await json(
+    teamMaterialSchema,
+    await api.post(`/api/teams/${teamId}/materials`, {
+      data: { name: 'Chalk-white PLA', baseMaterial: 'PLA', clearanceAdjustments: { press: 0, snug: 0.05, slide: 0 } },
+    }),
+  );
   presetId = (
     await json(
+      presetSchema,
       await api.post(`/api/teams/${teamId}/presets`, {
         data: {
           name: 'Mask brow seam',
@@ -76,7 +96,16 @@ describe('design screen with a team library', () => {
       .poll(() => page.getByText('the calibration of printer profile "Corner FDM"').count())
       .toBeGreaterThan(0);
     // Printer correction is the profile's now; the typed field is gone.
-    expect(await page.getByLabel('Printer correction (optional)').count()).toBe(0);
+    await expect.poll(() => page.getByLabel('Printer correction (optional)').count()).toBe(0);
+    // A team material's adjustment replaces the catalogue's: 0.16 published + 0.05 − 0.04 = 0.17 mm.
+    await page.getByLabel('Team material').selectOption({ label: 'Chalk-white PLA' });
+    await expect.poll(() => page.getByTestId('clearance').textContent()).toContain('0.17 mm');
+    await expect
+      .poll(() => page.getByText('for Chalk-white PLA (a team material based on PLA)').count())
+      .toBeGreaterThan(0);
+    await page.getByLabel('Material', { exact: true }).selectOption('PETG');
+    await expect.poll(() => page.getByLabel('Team material').inputValue()).toBe('');
+    await page.getByLabel('Material', { exact: true }).selectOption('PLA');
     await page.getByLabel('Printer profile').selectOption({ label: 'None: type a correction below' });
     await expect.poll(() => page.getByLabel('Printer correction (optional)').count()).toBe(1);
   });
@@ -85,8 +114,9 @@ describe('design screen with a team library', () => {
     await page.getByLabel('Start from a preset').selectOption({ label: 'Mask brow seam (version 1)' });
     await page.getByRole('button', { name: 'Use this preset' }).click();
     await expect.poll(() => page.getByTestId('preset-origin').textContent()).toContain('version 1 — unchanged');
-    expect(await page.getByLabel('Key width (x)').inputValue()).toBe('12');
-    expect(await page.getByLabel('Printer profile').inputValue()).toBe(profileId);
+    // The number fields re-display a loaded value one render after the form changes.
+    await expect.poll(() => page.getByLabel('Key width (x)').inputValue()).toBe('12');
+    await expect.poll(() => page.getByLabel('Printer profile').inputValue()).toBe(profileId);
     await upToDate(page);
 
     const [download] = await Promise.all([
@@ -94,16 +124,16 @@ describe('design screen with a team library', () => {
       page.getByRole('button', { name: 'Download the kit (.zip)' }).click(),
     ]);
     expect(download.suggestedFilename()).toMatch(/\.zip$/);
-    const history = await json(await api.get(`/api/teams/${teamId}/kits`));
+    const history = await json(kitHistoryPageSchema, await api.get(`/api/teams/${teamId}/kits`));
     expect(history.items[0]).toMatchObject({ presetId, presetVersion: 1, printerProfileId: profileId });
 
     await page.getByLabel('Depth into each half').fill('9');
     await expect.poll(() => page.getByTestId('preset-origin').textContent()).toContain('changed since');
     await page.getByRole('button', { name: 'Save as version 2 of “Mask brow seam”' }).click();
     await expect.poll(() => page.getByText('Saved as version 2 of “Mask brow seam”.').count()).toBe(1);
-    const saved = await json(await api.get(`/api/teams/${teamId}/presets/${presetId}`));
+    const saved = await json(presetSchema, await api.get(`/api/teams/${teamId}/presets/${presetId}`));
     expect(saved.version).toBe(2);
-    expect(saved.settings.key.depth).toBe(9);
+    expect(saved.settings).toMatchObject({ key: { depth: 9 } });
     expect(await seriousAxeViolations(page)).toEqual([]);
     await screenshot(page, 'design-from-preset');
   });
@@ -111,6 +141,7 @@ describe('design screen with a team library', () => {
   it('shows a stale save as a conflict and keeps both versions', async () => {
     // Someone else saves version 3 while this screen still works from version 2.
     await json(
+      presetSchema,
       await api.patch(`/api/teams/${teamId}/presets/${presetId}`, {
         data: { baseVersion: 2, description: 'Deeper keys for the thicker brow.' },
       }),
@@ -121,11 +152,14 @@ describe('design screen with a team library', () => {
     await screenshot(page, 'design-preset-conflict');
     await page.getByRole('button', { name: 'Save mine as version 4' }).click();
     await expect.poll(() => page.getByText('Saved as version 4 of “Mask brow seam”.').count()).toBe(1);
-    const versions = await json(await api.get(`/api/teams/${teamId}/presets/${presetId}/versions`));
-    expect(versions.items.map((v: { version: number }) => v.version)).toEqual([4, 3, 2, 1]);
-    const current = await json(await api.get(`/api/teams/${teamId}/presets/${presetId}`));
+    const versions = await json(
+      presetVersionListSchema,
+      await api.get(`/api/teams/${teamId}/presets/${presetId}/versions`),
+    );
+    expect(versions.items.map((v) => v.version)).toEqual([4, 3, 2, 1]);
+    const current = await json(presetSchema, await api.get(`/api/teams/${teamId}/presets/${presetId}`));
     expect(current.description).toBe('Deeper keys for the thicker brow.');
-    expect(current.settings.key.margin).toBe(3);
+    expect(current.settings).toMatchObject({ key: { margin: 3 } });
   });
 
   it('saves the design as a new preset without its face', async () => {
@@ -137,10 +171,10 @@ describe('design screen with a team library', () => {
     await page.getByLabel('Preset name').fill('Mask brow seam, wide walls');
     await page.getByRole('button', { name: 'Save preset' }).click();
     await expect.poll(() => page.getByText('Saved as the new preset “Mask brow seam, wide walls”.').count()).toBe(1);
-    const list = await json(await api.get(`/api/teams/${teamId}/presets?q=wide`));
+    const list = await json(presetPageSchema, await api.get(`/api/teams/${teamId}/presets?q=wide`));
     expect(list.items).toHaveLength(1);
-    const made = await json(await api.get(`/api/teams/${teamId}/presets/${list.items[0].id}`));
-    expect(made.settings.face).toBeUndefined();
+    const made = await json(presetSchema, await api.get(`/api/teams/${teamId}/presets/${list.items[0]!.id}`));
+    expect(made.settings).not.toHaveProperty('face');
     expect(made.printerProfileId).toBe(profileId);
   });
 
@@ -148,7 +182,7 @@ describe('design screen with a team library', () => {
     const p = await context.newPage();
     await p.goto(`/design?preset=${presetId}`);
     await expect.poll(() => p.getByTestId('preset-origin').textContent()).toContain('version 4');
-    expect(await p.getByLabel('Wall around each pocket').inputValue()).toBe('3');
+    await expect.poll(() => p.getByLabel('Wall around each pocket').inputValue()).toBe('3');
     await p.close();
   });
 });

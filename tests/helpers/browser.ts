@@ -4,7 +4,8 @@ import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { afterAll, beforeAll } from 'vitest';
 import { pino } from 'pino';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { CHROMIUM, launchChromium } from './chromium-launch';
 import { createApp } from '../../server/app';
 import { createDatabase } from '../../server/db/client';
 import { defaultAuthSettings } from '../../server/config/auth-settings';
@@ -15,20 +16,6 @@ const root = path.resolve(import.meta.dirname, '..', '..');
 // SEAMWRIGHT_DIST: another build folder, for parallel runs (scripts/lib/build-client.mjs).
 const clientDir = path.join(root, process.env.SEAMWRIGHT_DIST ?? 'dist');
 const screenshotDir = path.join(root, '.screenshots');
-const CHROMIUM = '/usr/bin/chromium';
-
-// TOOLCHAIN.md: the flags that let Debian's Chromium render WebGL 2 through SwiftShader, headless. Playwright
-// starts every launch with a fresh temporary profile (its own --user-data-dir).
-const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
 
 const generous = { windowMs: 60_000, limit: 10_000 };
 
@@ -91,7 +78,7 @@ export function useBrowserApp(options: BrowserAppOptions = {}): BrowserApp {
     const mail = mailing ? { mailer: mailing.mailer, outbox: { messages } } : {};
     server.on('request', createApp({ db, logger: pino({ level: 'silent' }), clientDir, auth, ...mail }));
     state.server = server;
-    state.browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS });
+    state.browser = await launchChromium();
   });
 
   afterAll(async () => {

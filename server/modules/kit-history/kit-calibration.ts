@@ -1,6 +1,7 @@
 import { AppError } from '../../errors/app-error';
 import type { ResolvedKitRequest } from '../../../shared/schemas/kit-request';
-import { calibrationSourceWords, type PrinterProfile } from '../../../shared/schemas/printer-profile';
+import type { PrinterProfile } from '../../../shared/schemas/printer-profile';
+import { profileCalibration } from '../../../shared/library/profile-calibration';
 
 /** The request the kit is built from, and the calibration it used (null: none). */
 export interface CalibratedRequest {
@@ -35,13 +36,12 @@ export function applyCalibration(request: ResolvedKitRequest, profile: PrinterPr
       [{ path: 'printerProfileId', message: `Choose a ${words(request.process)} printer profile, or none.` }],
     );
   }
-  const entry = profile.calibration.find((e) => e.material === request.material && e.fit === request.fit);
-  if (!entry) return applyCalibration(request, null);
-  const source = calibrationSourceWords(profile.name, entry);
+  const calibration = profileCalibration(profile, request.material, request.fit);
+  if (!calibration) return applyCalibration(request, null);
   return {
     // The source travels with the request, so the fit derivation in the manifest names the profile.
-    request: { ...request, calibrationOffset: entry.offsetMm, calibrationSource: source.slice(0, 200) },
-    calibration: { offsetMm: entry.offsetMm, source },
+    request: { ...request, calibrationOffset: calibration.offsetMm, calibrationSource: calibration.source },
+    calibration,
   };
 }
 

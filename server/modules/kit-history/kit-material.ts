@@ -1,6 +1,7 @@
 import { AppError } from '../../errors/app-error';
 import type { ResolvedKitRequest } from '../../../shared/schemas/kit-request';
 import type { TeamMaterial } from '../../../shared/schemas/material';
+import { teamMaterialTuning } from '../../../shared/library/team-material-tuning';
 
 /**
  * Applies a team material to a kit request: its clearance adjustment for the request's fit class becomes
@@ -24,8 +25,5 @@ export function applyTeamMaterial(request: ResolvedKitRequest, material: TeamMat
       ],
     );
   }
-  // A stored material always has all three fit classes (the schema defaults each to 0); 0 stays the fallback
-  // for a row written before that default existed.
-  const clearanceAdjustment = material.clearanceAdjustments[request.fit] ?? 0;
-  return { ...request, materialTuning: { name: material.name, clearanceAdjustment } };
+  return { ...request, materialTuning: teamMaterialTuning(material, request.fit) };
 }

@@ -4,6 +4,7 @@ import { DesignScreen } from '../../features/design/components/design-screen';
 import type { DesignLibrary } from '../../features/design/lib/design-library';
 import { createPreset } from '../../features/presets/api/create-preset';
 import { getPreset } from '../../features/presets/api/get-preset';
+import { teamMaterialsQueryOptions } from '../../features/materials/api/materials';
 import { presetsQueryOptions } from '../../features/presets/api/get-presets';
 import { conflictOf, updatePreset } from '../../features/presets/api/update-preset';
 import { printerProfilesQueryOptions } from '../../features/printer-profiles/api/printer-profiles';
@@ -11,7 +12,7 @@ import { useCurrentTeam } from '../../lib/session';
 
 /**
  * /design: the joint designer. Loaded lazily, so three.js and the geometry code load only here. Signed in,
- * the screen gets the current team's presets and printer profiles from their features.
+ * the screen gets the current team's presets, printer profiles and materials from their features.
  */
 export function DesignRoute() {
   const { team } = useCurrentTeam();
@@ -20,6 +21,7 @@ export function DesignRoute() {
   const list = { sort: 'name', order: 'asc', pageSize: 100 } as const;
   const presets = useQuery({ ...presetsQueryOptions(teamId, list), enabled });
   const profiles = useQuery({ ...printerProfilesQueryOptions(teamId, list), enabled });
+  const materials = useQuery({ ...teamMaterialsQueryOptions(teamId, list), enabled });
   const { refetch } = presets;
   const library = useMemo<DesignLibrary | null>(() => {
     if (!team) return null;
@@ -29,6 +31,7 @@ export function DesignRoute() {
       canEdit: team.role !== 'viewer',
       presets: presets.data?.items.map(({ id, name, version }) => ({ id, name, version })) ?? [],
       printerProfiles: profiles.data?.items ?? [],
+      teamMaterials: materials.data?.items ?? [],
       loadPreset: (id) => getPreset(team.id, id),
       createPreset: async (body) => {
         const saved = await createPreset(team.id, body);
@@ -47,6 +50,6 @@ export function DesignRoute() {
         }
       },
     };
-  }, [team, presets.data, profiles.data, refetch]);
+  }, [team, presets.data, profiles.data, materials.data, refetch]);
   return <DesignScreen library={library} />;
 }

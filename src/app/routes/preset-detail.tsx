@@ -93,6 +93,17 @@ function PresetPage() {
           {preset.archived && ' · archived'} · saved {new Date(preset.updatedAt).toLocaleString()} by{' '}
           {preset.updatedBy?.name ?? 'a former member'}
         </p>
+        <p>
+          <Link
+            to={`/design?preset=${preset.id}`}
+            className="inline-block rounded-md bg-kiln px-4 py-2 font-medium text-white hover:bg-ink"
+          >
+            Open in the designer
+          </Link>{' '}
+          <span className="text-sm text-ink-soft">
+            to see it on a face, change any setting{canEdit ? ' and save it as the next version' : ''}.
+          </span>
+        </p>
       </header>
       {canEdit ? (
         <PresetEditor teamId={team.id} preset={preset} />

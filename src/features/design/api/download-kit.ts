@@ -9,11 +9,12 @@ export interface DownloadedFile {
   readonly name: string;
 }
 
-/** What a recorded download names besides its request: the preset (and version) and the printer profile. */
+/** What a recorded download names besides its request: the preset (and version), printer and team material. */
 export interface KitOrigin {
   readonly presetId?: string | null;
   readonly presetVersion?: number | null;
   readonly printerProfileId?: string | null;
+  readonly teamMaterialId?: string | null;
 }
 
 /**

@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { useWatch, type UseFormReturn } from 'react-hook-form';
-import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import type { DesignValues } from '../lib/design-values';
+import type { TeamChoices } from '../lib/preset-values';
 import type { LengthUnit } from '../lib/units';
 import { DovetailFields } from './dovetail-fields';
 import { FaceFields } from './face-fields';
@@ -12,12 +12,12 @@ import { KeyFields } from './key-fields';
 interface DesignFormProps {
   form: UseFormReturn<DesignValues>;
   unit: LengthUnit;
-  /** The current team's printer profiles; null when nobody is signed in. */
-  printerProfiles: readonly PrinterProfile[] | null;
+  /** The current team's printer profiles and materials; null when nobody is signed in. */
+  team: TeamChoices | null;
 }
 
 /** Every setting of a kit. The preview follows each change, so the form has no submit button. */
-export const DesignForm = memo(function DesignForm({ form, unit, printerProfiles }: DesignFormProps) {
+export const DesignForm = memo(function DesignForm({ form, unit, team }: DesignFormProps) {
   const { control, setValue } = form;
   const joint = useWatch({ control, name: 'joint' });
   return (
@@ -34,7 +34,7 @@ export const DesignForm = memo(function DesignForm({ form, unit, printerProfiles
       />
       <FaceFields control={control} unit={unit} />
       {joint === 'key' ? <KeyFields control={control} unit={unit} /> : <DovetailFields control={control} unit={unit} />}
-      <FitFields control={control} setValue={setValue} unit={unit} printerProfiles={printerProfiles} />
+      <FitFields control={control} setValue={setValue} unit={unit} team={team} />
     </form>
   );
 });

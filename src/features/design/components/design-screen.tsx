@@ -5,8 +5,8 @@ import { usePreviewBuild } from '../hooks/use-preview-build';
 import { useUnits } from '../hooks/use-units';
 import { useDesignPresets } from '../hooks/use-design-presets';
 import type { DesignLibrary } from '../lib/design-library';
-import { DEFAULT_DESIGN, designResolver, toKitRequest, type DesignValues } from '../lib/design-values';
-import { presetText, withProfileCalibration } from '../lib/preset-values';
+import { DEFAULT_DESIGN, designResolver, type DesignValues } from '../lib/design-values';
+import { chosenProfile, chosenTeamMaterial, kitRequestOf, presetText } from '../lib/preset-values';
 import { DesignForm } from './design-form';
 import { FaceDrawing } from './face-drawing';
 import { FitExplanation } from './fit-explanation';
@@ -27,10 +27,9 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
   const form = useForm<DesignValues>({ resolver: designResolver, defaultValues: DEFAULT_DESIGN, mode: 'onChange' });
   const values = useWatch({ control: form.control }) as DesignValues;
   const presets = useDesignPresets(form, library);
-  const profile = library?.printerProfiles.find((p) => p.id === values.printerProfileId) ?? null;
   // Keyed on the request's text, so a re-render that changes nothing never asks for a new build. The chosen
-  // printer profile's calibration is part of it, as in the kit the server builds.
-  const requestText = JSON.stringify(withProfileCalibration(toKitRequest(values), profile));
+  // team material and printer profile's calibration are part of it, as in the kit the server builds.
+  const requestText = JSON.stringify(kitRequestOf(values, library));
   const parsed = useMemo(() => kitRequestSchema.safeParse(JSON.parse(requestText)), [requestText]);
   const request = parsed.success ? parsed.data : null;
   const asSent = useMemo(
@@ -39,7 +38,8 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
   );
   const preview = usePreviewBuild(request);
   const origin = presets.origin;
-  const unchangedOrigin = origin && origin.settingsText === presetText(values) ? origin : null;
+  const currentText = presetText(values, library);
+  const unchangedOrigin = origin && origin.settingsText === currentText ? origin : null;
   // The 3D view gets each build at once; the drawing, fit and file list follow a moment later, so a new
   // build reaches the screen without waiting for every panel to re-render.
   const kit = useDeferredValue(preview.built?.kit ?? null);
@@ -58,8 +58,8 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
       </header>
       <div className="grid gap-8 lg:grid-cols-[minmax(20rem,26rem)_1fr]">
         <div className="space-y-6 rounded-card border border-paper-deep bg-white/50 p-4 sm:p-5">
-          <PresetBar library={library} presets={presets} currentText={presetText(values)} invalid={!request} />
-          <DesignForm form={form} unit={unit} printerProfiles={library?.printerProfiles ?? null} />
+          <PresetBar library={library} presets={presets} currentText={currentText} invalid={!request} />
+          <DesignForm form={form} unit={unit} team={library} />
         </div>
         <div className="min-w-0 space-y-10">
           <PreviewPanel preview={preview} unit={unit} formInvalid={!request} />
@@ -75,7 +75,8 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
               // A download is recorded with its preset only while the design still matches that version.
               presetId: unchangedOrigin?.id ?? null,
               presetVersion: unchangedOrigin?.version ?? null,
-              printerProfileId: profile?.id ?? null,
+              printerProfileId: chosenProfile(values, library)?.id ?? null,
+              teamMaterialId: chosenTeamMaterial(values, library)?.id ?? null,
             }}
           />
         </div>

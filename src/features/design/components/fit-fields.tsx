@@ -2,8 +2,8 @@ import { Link } from 'react-router-dom';
 import { useWatch, type Control, type UseFormSetValue } from 'react-hook-form';
 import { defaultProcessFor } from '../../../../shared/fit/default-process-for';
 import { materialSchema, type Material } from '../../../../shared/schemas/joint-options';
-import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import type { DesignValues } from '../lib/design-values';
+import type { TeamChoices } from '../lib/preset-values';
 import type { LengthUnit } from '../lib/units';
 import { ChoiceField } from './form/choice-field';
 import { NumberField } from './form/number-field';
@@ -31,16 +31,22 @@ interface FitFieldsProps {
   control: Control<DesignValues>;
   setValue: UseFormSetValue<DesignValues>;
   unit: LengthUnit;
-  /** The current team's printer profiles; null when nobody is signed in. */
-  printerProfiles: readonly PrinterProfile[] | null;
+  /** The current team's printer profiles and materials; null when nobody is signed in. */
+  team: TeamChoices | null;
 }
 
 /** Printing process, material, fit class and clearance (derived by the fit engine, or the maker's own). */
-export function FitFields({ control, setValue, unit, printerProfiles }: FitFieldsProps) {
-  const [process, clearanceMode, printerProfileId] = useWatch({
+export function FitFields({ control, setValue, unit, team }: FitFieldsProps) {
+  const [process, material, clearanceMode, printerProfileId] = useWatch({
     control,
-    name: ['process', 'clearanceMode', 'printerProfileId'],
+    name: ['process', 'material', 'clearanceMode', 'printerProfileId'],
   });
+  // A team material or a preset's saved tuning belongs to one base material; it means nothing for another.
+  const forgetTuning = () => {
+    setValue('teamMaterialId', '', { shouldValidate: true });
+    setValue('materialTuning', undefined, { shouldValidate: true });
+  };
+  const variants = team?.teamMaterials.filter((m) => m.baseMaterial === material) ?? [];
   const materials = materialSchema.options
     .filter((m) => defaultProcessFor(m) === process)
     .map((m) => ({ value: m, label: materialNames[m] }));
@@ -58,12 +64,30 @@ export function FitFields({ control, setValue, unit, printerProfiles }: FitField
           ]}
           onPicked={(p) => {
             setValue('material', p === 'resin' ? 'resin-standard' : 'PLA', { shouldValidate: true });
+            forgetTuning();
             // A profile prints one process; its calibration means nothing for the other.
             setValue('printerProfileId', '', { shouldValidate: true });
           }}
         />
-        <SelectField control={control} name="material" label="Material" options={materials} />
+        <SelectField control={control} name="material" label="Material" options={materials} onPicked={forgetTuning} />
       </div>
+      {team && (
+        <SelectField
+          control={control}
+          name="teamMaterialId"
+          label="Team material"
+          hint={`Your team’s own ${materialNames[material]}, with its clearance adjustments.`}
+          options={[
+            {
+              value: '',
+              label: variants.length
+                ? `None: the catalogue’s ${materialNames[material]}`
+                : 'None saved for this material',
+            },
+            ...variants.map((m) => ({ value: m.id, label: m.name })),
+          ]}
+        />
+      )}
       <ChoiceField control={control} name="fit" legend="How should the joint hold?" options={fits} />
       <ChoiceField
         control={control}
@@ -84,7 +108,7 @@ export function FitFields({ control, setValue, unit, printerProfiles }: FitField
           hint="Gap between key and pocket wall on each side."
         />
       )}
-      {printerProfiles && <PrinterField control={control} profiles={printerProfiles} unit={unit} />}
+      {team && <PrinterField control={control} profiles={team.printerProfiles} unit={unit} />}
       {!printerProfileId && (
         <NumberField
           control={control}
@@ -95,7 +119,7 @@ export function FitFields({ control, setValue, unit, printerProfiles }: FitField
           hint="From your printer’s fit test: positive if test keys came out tight, negative if loose."
         />
       )}
-      {!printerProfiles && (
+      {!team && (
         <p className="text-sm text-ink-soft">
           <Link to="/sign-in" className="font-medium text-ink underline underline-offset-4">
             Sign in

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { useWatch, type Control } from 'react-hook-form';
-import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
+import type { TeamChoices } from '../lib/preset-values';
 import { profileCalibration } from '../../../../shared/library/profile-calibration';
 import type { DesignValues } from '../lib/design-values';
 import { formatLength, type LengthUnit } from '../lib/units';
@@ -10,7 +10,7 @@ const linkClass = 'font-medium text-ink underline underline-offset-4';
 
 interface PrinterFieldProps {
   control: Control<DesignValues>;
-  profiles: readonly PrinterProfile[];
+  profiles: TeamChoices['printerProfiles'];
   unit: LengthUnit;
 }
 

@@ -2,22 +2,22 @@ import { useCallback, useState } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import type { Preset } from '../../../../shared/schemas/preset';
 import type { DesignLibrary, PresetOrigin } from '../lib/design-library';
-import { toKitRequest, type DesignValues } from '../lib/design-values';
-import { presetText, settingsOf, valuesFromPreset } from '../lib/preset-values';
+import type { DesignValues } from '../lib/design-values';
+import { chosenProfile, presetRequest, presetText, settingsOf, valuesFromPreset } from '../lib/preset-values';
 
 /** What saving the design as the next version of its preset ended in. */
 export type VersionSave = { kind: 'saved'; preset: Preset } | { kind: 'conflict'; current: Preset };
 
-const originOf = (preset: Preset, values: DesignValues): PresetOrigin => ({
+const originOf = (preset: Preset, values: DesignValues, library: DesignLibrary | null): PresetOrigin => ({
   id: preset.id,
   name: preset.name,
   version: preset.version,
-  settingsText: presetText(values),
+  settingsText: presetText(values, library),
 });
 
-const bodyOf = (values: DesignValues) => ({
-  settings: settingsOf(toKitRequest(values)),
-  printerProfileId: values.printerProfileId || null,
+const bodyOf = (values: DesignValues, library: DesignLibrary | null) => ({
+  settings: settingsOf(presetRequest(values, library)),
+  printerProfileId: chosenProfile(values, library)?.id ?? null,
 });
 
 /**
@@ -31,9 +31,9 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
 
   const apply = useCallback(
     (preset: Preset) => {
-      const values = valuesFromPreset(form.getValues(), preset, library?.printerProfiles ?? []);
+      const values = valuesFromPreset(form.getValues(), preset, library);
       form.reset(values);
-      setOrigin(originOf(preset, values));
+      setOrigin(originOf(preset, values, library));
     },
     [form, library],
   );
@@ -50,8 +50,8 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
     async (fields: { name: string; description?: string }) => {
       if (!library) throw new Error('Sign in to save presets.');
       const values = form.getValues();
-      const preset = await library.createPreset({ ...fields, ...bodyOf(values) });
-      setOrigin(originOf(preset, values));
+      const preset = await library.createPreset({ ...fields, ...bodyOf(values, library) });
+      setOrigin(originOf(preset, values, library));
       return preset;
     },
     [library, form],
@@ -62,9 +62,9 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
     async (baseVersion: number): Promise<VersionSave> => {
       if (!library || !origin) throw new Error('Load a preset first.');
       const values = form.getValues();
-      const result = await library.updatePreset(origin.id, { baseVersion, ...bodyOf(values) });
+      const result = await library.updatePreset(origin.id, { baseVersion, ...bodyOf(values, library) });
       if ('conflict' in result) return { kind: 'conflict', current: result.conflict };
-      setOrigin(originOf(result.saved, values));
+      setOrigin(originOf(result.saved, values, library));
       return { kind: 'saved', preset: result.saved };
     },
     [library, origin, form],

@@ -1,5 +1,7 @@
 import type { Preset, PresetInput, PresetPatch } from '../../../../shared/schemas/preset';
+import type { TeamMaterial } from '../../../../shared/schemas/material';
 import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
+import type { TeamChoices } from './preset-values';
 
 /** A preset as the design screen lists it. */
 export interface PresetChoice {
@@ -13,13 +15,14 @@ export interface PresetChoice {
  * presets and printer profiles, and the calls that load and save presets. The app's route builds it from
  * the presets and printer-profiles features, so the design feature does not import them.
  */
-export interface DesignLibrary {
+export interface DesignLibrary extends TeamChoices {
   readonly teamId: string;
   readonly teamName: string;
   /** Editors and owners save presets; viewers only start from them. */
   readonly canEdit: boolean;
   readonly presets: readonly PresetChoice[];
   readonly printerProfiles: readonly PrinterProfile[];
+  readonly teamMaterials: readonly TeamMaterial[];
   loadPreset(id: string): Promise<Preset>;
   createPreset(body: PresetInput): Promise<Preset>;
   /** The saved preset, or, when the save was based on an older version (409), the preset as it is now. */

@@ -23,6 +23,10 @@ export interface DesignValues {
   calibrationOffset?: number;
   /** A printer profile of the current team whose calibration replaces the typed correction; '' for none. */
   printerProfileId: string;
+  /** A team material based on `material` whose adjustments the fit engine uses; '' for the catalogue's. */
+  teamMaterialId: string;
+  /** A preset's saved team-material tuning when that material is not in the team (any more): sent as saved. */
+  materialTuning?: KitRequest['materialTuning'];
   /** Kept from a preset so that saving it again changes nothing the form does not show. */
   format?: KitRequest['format'];
   chordTolerance?: number;
@@ -40,6 +44,7 @@ export const DEFAULT_DESIGN: DesignValues = {
   clearanceMode: 'derived',
   clearance: 0.15,
   printerProfileId: '',
+  teamMaterialId: '',
   face: {
     shape: 'rect',
     width: 80,
@@ -90,6 +95,8 @@ export function toKitRequest(v: DesignValues): KitRequest {
     clearance: v.clearanceMode === 'set' ? v.clearance : undefined,
     // With a printer profile chosen, its calibration entry is applied afterwards (see withProfileCalibration).
     calibrationOffset: v.printerProfileId ? undefined : v.calibrationOffset,
+    // With a team material chosen, its tuning is applied afterwards (see withTeamMaterial).
+    materialTuning: v.teamMaterialId ? undefined : v.materialTuning,
     format: v.format,
     chordTolerance: v.chordTolerance,
     face: faceOf(v.face),

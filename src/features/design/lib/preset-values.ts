@@ -1,27 +1,58 @@
 import type { KitRequest } from '../../../../shared/schemas/kit-request';
+import type { TeamMaterial } from '../../../../shared/schemas/material';
 import type { PresetSettings, PresetSettingsInput } from '../../../../shared/schemas/preset-settings';
 import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import { profileCalibration } from '../../../../shared/library/profile-calibration';
+import { teamMaterialTuning } from '../../../../shared/library/team-material-tuning';
 import { DEFAULT_DESIGN, toKitRequest, type DesignValues } from './design-values';
+
+/** The current team's printer profiles and materials, as far as the form needs them. */
+export interface TeamChoices {
+  readonly printerProfiles: readonly Pick<PrinterProfile, 'id' | 'name' | 'process' | 'calibration'>[];
+  readonly teamMaterials: readonly Pick<TeamMaterial, 'id' | 'name' | 'baseMaterial' | 'clearanceAdjustments'>[];
+}
+
+const NO_TEAM: TeamChoices = { printerProfiles: [], teamMaterials: [] };
+
+/** The chosen printer profile, if the team has it and it prints the chosen process. */
+export function chosenProfile(values: DesignValues, team: TeamChoices | null) {
+  return (
+    (team ?? NO_TEAM).printerProfiles.find((p) => p.id === values.printerProfileId && p.process === values.process) ??
+    null
+  );
+}
+
+/** The chosen team material, if the team has it and it is based on the chosen material. */
+export function chosenTeamMaterial(values: DesignValues, team: TeamChoices | null) {
+  return (
+    (team ?? NO_TEAM).teamMaterials.find((m) => m.id === values.teamMaterialId && m.baseMaterial === values.material) ??
+    null
+  );
+}
 
 /**
  * The form's values with a preset's settings in place: joint, process, material, fit, clearance, the
- * correction or printer profile and every key or dovetail setting (settings the form has no field for are
- * kept and sent unchanged). The face stays as it is, since a preset has none; the other joint's settings stay
- * too, so switching joints still finds them.
+ * correction or printer profile, the team material and every key or dovetail setting (settings the form has
+ * no field for are kept and sent unchanged). The face stays as it is, since a preset has none; the other
+ * joint's settings stay too, so switching joints still finds them.
  *
  * @param current - the form's values now
  * @param preset - the preset's settings and printer profile
- * @param profiles - the team's printer profiles: a preset's profile that is gone or prints another process is
- *   not chosen
+ * @param team - the team's printer profiles and materials: a preset's profile that is gone or prints another
+ *   process is not chosen; a saved team-material tuning picks the team material of that name and base, or
+ *   else is kept as saved
  */
 export function valuesFromPreset(
   current: DesignValues,
   preset: { settings: PresetSettings; printerProfileId: string | null },
-  profiles: readonly Pick<PrinterProfile, 'id' | 'process'>[],
+  team: TeamChoices | null,
 ): DesignValues {
   const s = preset.settings;
-  const profile = profiles.find((p) => p.id === preset.printerProfileId && p.process === s.process);
+  const { printerProfiles, teamMaterials } = team ?? NO_TEAM;
+  const profile = printerProfiles.find((p) => p.id === preset.printerProfileId && p.process === s.process);
+  const material = s.materialTuning
+    ? teamMaterials.find((m) => m.name === s.materialTuning!.name && m.baseMaterial === s.material)
+    : undefined;
   return {
     ...current,
     joint: s.joint,
@@ -32,6 +63,8 @@ export function valuesFromPreset(
     clearance: s.clearance ?? current.clearance ?? DEFAULT_DESIGN.clearance,
     calibrationOffset: s.calibrationOffset,
     printerProfileId: profile?.id ?? '',
+    teamMaterialId: material?.id ?? '',
+    materialTuning: material ? undefined : s.materialTuning,
     format: s.format,
     chordTolerance: s.chordTolerance,
     key: s.joint === 'key' ? { ...s.key } : current.key,
@@ -46,11 +79,14 @@ export function settingsOf(request: KitRequest): PresetSettingsInput {
 }
 
 /**
- * The form's values as text that changes exactly when what a preset would save changes (settings and printer
- * profile), so the screen can say whether the design still matches the preset it came from.
+ * The kit request with the team material's tuning for its fit class (shared/library/team-material-tuning.ts),
+ * as the server applies it; unchanged without one.
  */
-export function presetText(values: DesignValues): string {
-  return JSON.stringify({ settings: settingsOf(toKitRequest(values)), printerProfileId: values.printerProfileId });
+export function withTeamMaterial(
+  request: KitRequest,
+  material: Pick<TeamMaterial, 'name' | 'clearanceAdjustments'> | null,
+): KitRequest {
+  return material ? { ...request, materialTuning: teamMaterialTuning(material, request.fit) } : request;
 }
 
 /**
@@ -66,4 +102,25 @@ export function withProfileCalibration(
   const calibration = profileCalibration(profile, request.material, request.fit);
   if (!calibration) return request;
   return { ...request, calibrationOffset: calibration.offsetMm, calibrationSource: calibration.source };
+}
+
+/** What a preset saves of the form: its request with the team material's tuning, before any calibration. */
+export function presetRequest(values: DesignValues, team: TeamChoices | null): KitRequest {
+  return withTeamMaterial(toKitRequest(values), chosenTeamMaterial(values, team));
+}
+
+/** The request the kit is built from, in the preview and on the server: team material, then calibration. */
+export function kitRequestOf(values: DesignValues, team: TeamChoices | null): KitRequest {
+  return withProfileCalibration(presetRequest(values, team), chosenProfile(values, team));
+}
+
+/**
+ * The form's values as text that changes exactly when what a preset would save changes (settings and printer
+ * profile), so the screen can say whether the design still matches the preset it came from.
+ */
+export function presetText(values: DesignValues, team: TeamChoices | null): string {
+  return JSON.stringify({
+    settings: settingsOf(presetRequest(values, team)),
+    printerProfileId: chosenProfile(values, team)?.id ?? null,
+  });
 }

@@ -5,11 +5,16 @@ import { withoutFace } from '../../../../../shared/schemas/preset-settings';
 import type { PrinterProfile } from '../../../../../shared/schemas/printer-profile';
 import { DEFAULT_DESIGN, toKitRequest } from '../../../../../src/features/design/lib/design-values';
 import {
+  kitRequestOf,
+  presetRequest,
   presetText,
+  type TeamChoices,
   valuesFromPreset,
   withProfileCalibration,
 } from '../../../../../src/features/design/lib/preset-values';
 import { applyCalibration } from '../../../../../server/modules/kit-history/kit-calibration';
+import { applyTeamMaterial } from '../../../../../server/modules/kit-history/kit-material';
+import type { TeamMaterial } from '../../../../../shared/schemas/material';
 import { dovetailRequestArb, keyRequestArb } from '../../../../shared/kit/kit-request-arbitrary';
 
 const benchFdm = {
@@ -22,6 +27,14 @@ const benchFdm = {
   ],
 } as unknown as PrinterProfile;
 
+const greyPla = {
+  id: '00000000-0000-4000-8000-000000000002',
+  name: 'Grey matte PLA',
+  baseMaterial: 'PLA',
+  clearanceAdjustments: { press: 0.01, snug: 0.03, slide: 0.05 },
+} as const;
+const team: TeamChoices = { printerProfiles: [benchFdm], teamMaterials: [greyPla] };
+
 describe('valuesFromPreset', () => {
   it('puts every saved setting back, so the form sends the preset’s settings unchanged', () => {
     fc.assert(
@@ -30,7 +43,7 @@ describe('valuesFromPreset', () => {
         fc.pre(parsed.success);
         if (!parsed.success) return;
         const settings = withoutFace(parsed.data);
-        const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, []);
+        const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
         const again = kitRequestSchema.parse(toKitRequest(values));
         expect(withoutFace(again)).toEqual(settings);
       }),
@@ -48,7 +61,7 @@ describe('valuesFromPreset', () => {
         dovetail: { rootWidth: 8, height: 5 },
       }),
     );
-    const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, []);
+    const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
     expect(values.face).toEqual(DEFAULT_DESIGN.face);
     expect(values.key).toEqual(DEFAULT_DESIGN.key);
     expect(values.dovetail.rootWidth).toBe(8);
@@ -56,23 +69,27 @@ describe('valuesFromPreset', () => {
 
   it('chooses the preset’s printer profile only when the team still has it for that process', () => {
     const settings = withoutFace(kitRequestSchema.parse(toKitRequest(DEFAULT_DESIGN)));
-    expect(
-      valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: benchFdm.id }, [benchFdm]).printerProfileId,
-    ).toBe(benchFdm.id);
-    expect(valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: benchFdm.id }, []).printerProfileId).toBe('');
-    const resin = { ...benchFdm, process: 'resin' } as PrinterProfile;
-    expect(valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: resin.id }, [resin]).printerProfileId).toBe(
+    expect(valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: benchFdm.id }, team).printerProfileId).toBe(
+      benchFdm.id,
+    );
+    expect(valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: benchFdm.id }, null).printerProfileId).toBe(
       '',
     );
+    const resin = { ...benchFdm, process: 'resin' } as PrinterProfile;
+    expect(
+      valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: resin.id }, { ...team, printerProfiles: [resin] })
+        .printerProfileId,
+    ).toBe('');
   });
 });
 
 describe('presetText', () => {
   it('changes with a saved setting or the printer profile, not with the face', () => {
-    const base = presetText(DEFAULT_DESIGN);
-    expect(presetText({ ...DEFAULT_DESIGN, face: { ...DEFAULT_DESIGN.face, width: 120 } })).toBe(base);
-    expect(presetText({ ...DEFAULT_DESIGN, fit: 'press' })).not.toBe(base);
-    expect(presetText({ ...DEFAULT_DESIGN, printerProfileId: benchFdm.id })).not.toBe(base);
+    const base = presetText(DEFAULT_DESIGN, team);
+    expect(presetText({ ...DEFAULT_DESIGN, face: { ...DEFAULT_DESIGN.face, width: 120 } }, team)).toBe(base);
+    expect(presetText({ ...DEFAULT_DESIGN, fit: 'press' }, team)).not.toBe(base);
+    expect(presetText({ ...DEFAULT_DESIGN, printerProfileId: benchFdm.id }, team)).not.toBe(base);
+    expect(presetText({ ...DEFAULT_DESIGN, teamMaterialId: greyPla.id }, team)).not.toBe(base);
   });
 });
 
@@ -99,5 +116,42 @@ describe('withProfileCalibration', () => {
         expect(kitRequestSchema.parse(server)).toEqual(preview);
       }
     }
+  });
+});
+
+describe('team materials', () => {
+  const design = { ...DEFAULT_DESIGN, teamMaterialId: greyPla.id, printerProfileId: benchFdm.id };
+
+  it('saves the team material’s tuning for the fit class with a preset, but not the calibration', () => {
+    const request = presetRequest(design, team);
+    expect(request.materialTuning).toEqual({ name: 'Grey matte PLA', clearanceAdjustment: 0.03 });
+    expect(request.calibrationOffset).toBeUndefined();
+  });
+
+  it('ignores a team material of another base material', () => {
+    expect(presetRequest({ ...design, material: 'PETG' }, team).materialTuning).toBeUndefined();
+  });
+
+  it('finds the team material of a loaded preset by name, or keeps the saved tuning when it is gone', () => {
+    const settings = withoutFace(kitRequestSchema.parse(presetRequest(design, team)));
+    expect(valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, team)).toMatchObject({
+      teamMaterialId: greyPla.id,
+      materialTuning: undefined,
+    });
+    const gone = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
+    expect(gone.teamMaterialId).toBe('');
+    expect(toKitRequest(gone).materialTuning).toEqual({ name: 'Grey matte PLA', clearanceAdjustment: 0.03 });
+  });
+
+  it('builds the preview from the same request the server builds the kit from', () => {
+    const preview = kitRequestSchema.parse(kitRequestOf(design, team));
+    const server = applyCalibration(
+      applyTeamMaterial(kitRequestSchema.parse(toKitRequest(design)), { ...greyPla, process: 'fdm' } as TeamMaterial),
+      benchFdm,
+    ).request;
+    expect(kitRequestSchema.parse(server)).toEqual(preview);
+    // 0.16 mm published snug default on FDM (REFERENCES §7.2) + 0.03 team material − 0.03 printer calibration.
+    expect(preview.materialTuning?.clearanceAdjustment).toBe(0.03);
+    expect(preview.calibrationOffset).toBe(-0.03);
   });
 });
