@@ -22,7 +22,8 @@ export type BuiltInMaterial = z.infer<typeof builtInMaterialSchema>;
 /** `GET /api/teams/:teamId/materials/catalogue` reply. */
 export const materialCatalogueSchema = z.object({ items: z.array(builtInMaterialSchema) });
 
-const adjustment = (fit: string) => mmField(`${fit} clearance adjustment`, { min: -0.5, max: 0.5 }).default(0);
+const adjustmentField = (fit: string) => mmField(`${fit} clearance adjustment`, { min: -0.5, max: 0.5 });
+const adjustment = (fit: string) => adjustmentField(fit).default(0);
 
 /** Per fit class, mm per side added to the clearance for this material (may be negative). */
 export const clearanceAdjustmentsSchema = z.object({
@@ -50,12 +51,19 @@ export const teamMaterialInputSchema = z.object({
 export type TeamMaterialInput = z.input<typeof teamMaterialInputSchema>;
 export type ParsedTeamMaterialInput = z.output<typeof teamMaterialInputSchema>;
 
-/** `PATCH …/materials/:materialId` body: any of the fields. */
+/** A change of some fit classes' adjustments; the others keep theirs. */
+const clearanceAdjustmentsPatchSchema = z.object({
+  press: adjustmentField('press').optional(),
+  snug: adjustmentField('snug').optional(),
+  slide: adjustmentField('slide').optional(),
+});
+
+/** `PATCH …/materials/:materialId` body: any of the fields; `clearanceAdjustments` may name some fit classes only. */
 export const teamMaterialPatchSchema = z.object({
   name: libraryNameSchema.optional(),
   baseMaterial: materialSchema.optional(),
   shrinkagePercent: mmField('shrinkage', { min: 0, max: 5 }, '%').nullable().optional(),
-  clearanceAdjustments: clearanceAdjustmentsSchema.optional(),
+  clearanceAdjustments: clearanceAdjustmentsPatchSchema.optional(),
   notes: notesSchema.optional(),
 });
 export type TeamMaterialPatch = z.input<typeof teamMaterialPatchSchema>;

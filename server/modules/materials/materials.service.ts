@@ -67,9 +67,10 @@ export async function updateTeamMaterial(
     name,
     baseMaterial,
     shrinkagePercent,
-    clearanceAdjustments,
     notes,
     ...patch,
+    // Fit classes the patch does not name keep their adjustment.
+    clearanceAdjustments: { ...clearanceAdjustments, ...patch.clearanceAdjustments },
   });
   await withUniqueName('material', merged.name, () => repo.updateMaterial(ctx.db, teamId, id, user.id, merged));
   return (await repo.findMaterial(ctx.db, teamId, id))!;

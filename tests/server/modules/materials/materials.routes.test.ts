@@ -66,6 +66,9 @@ describe('material routes', () => {
     const edited = await editor.agent.patch(url).send({ clearanceAdjustments: { press: -0.02, snug: 0.03, slide: 0 } });
     expect(edited.status).toBe(200);
     expect(edited.body.clearanceAdjustments).toEqual({ press: -0.02, snug: 0.03, slide: 0 });
+    // Naming one fit class changes that one only.
+    const slideOnly = await editor.agent.patch(url).send({ clearanceAdjustments: { slide: 0.05 } });
+    expect(slideOnly.body.clearanceAdjustments).toEqual({ press: -0.02, snug: 0.03, slide: 0.05 });
     const tooMuch = await editor.agent.patch(url).send({ clearanceAdjustments: { press: 0, snug: 0.6, slide: 0 } });
     expect(tooMuch.status).toBe(400);
     expect(tooMuch.body.error.issues).toEqual([
