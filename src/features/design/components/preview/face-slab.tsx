@@ -1,6 +1,7 @@
 import { useEffect, useMemo } from 'react';
 import { ExtrudeGeometry, Shape, Vector2, type Plane } from 'three';
 import type { Face } from '../../../../../shared/schemas/face';
+import { SectionSides } from './section-sides';
 
 /** The face's outline as a flat three.js shape in the cut plane, mm. */
 function faceShape(face: Face): Shape {
@@ -28,19 +29,29 @@ interface FaceSlabProps {
   thickness: number;
   color: string;
   clip: Plane[];
+  /** The "Cut through" view: solid, with the cut filled in `color` (see {@link SectionSides}). */
+  section?: boolean;
 }
 
 /**
  * A stand-in for one half of the maker's model: the cut face pushed out `thickness` mm, drawn see-through
  * so the pockets, keys and rails inside show. It is only a picture; the kit never contains it.
  */
-export function FaceSlab({ face, half, thickness, color, clip }: FaceSlabProps) {
+export function FaceSlab({ face, half, thickness, color, clip, section }: FaceSlabProps) {
+  // Every build brings a new face object from the worker: key the slab on the face's values, so a change of any
+  // other setting reuses the slab instead of re-triangulating and re-uploading it.
+  const faceKey = JSON.stringify(face);
   const geometry = useMemo(() => {
-    const g = new ExtrudeGeometry(faceShape(face), { depth: thickness, bevelEnabled: false, curveSegments: 48 });
+    const g = new ExtrudeGeometry(faceShape(JSON.parse(faceKey) as Face), {
+      depth: thickness,
+      bevelEnabled: false,
+      curveSegments: 48,
+    });
     if (half === 'A') g.translate(0, 0, -thickness);
     return g;
-  }, [face, half, thickness]);
+  }, [faceKey, half, thickness]);
   useEffect(() => () => geometry.dispose(), [geometry]);
+  if (section) return <SectionSides geometry={geometry} outside={color} inside={color} clip={clip} offsetFill={1} />;
   return (
     <mesh geometry={geometry} renderOrder={2}>
       <meshStandardMaterial

@@ -1,10 +1,12 @@
 import { Canvas } from '@react-three/fiber';
-import { useMemo, type Ref } from 'react';
+import { useMemo, type Ref, type RefObject } from 'react';
 import { Plane, Vector3 } from 'three';
 import type { PreviewKit } from '../../lib/preview-kit';
+import type { SectionView } from '../../lib/section-view';
 import { CameraRig, type CameraCommands } from './camera-rig';
 import { FaceSlab } from './face-slab';
-import { KitParts } from './kit-parts';
+import { GapPin } from './gap-pin';
+import { KitParts, type PartClips } from './kit-parts';
 import { PREVIEW_COLORS } from './preview-colors';
 import { ShownMark } from './shown-mark';
 
@@ -15,10 +17,12 @@ interface KitCanvasProps {
   kit: PreviewKit;
   buildId: number;
   mode: ViewMode;
-  /** y of the section plane, mm. */
-  sectionY: number;
+  /** Where the "Cut through" view cuts and what it frames; null when the kit has nothing to cut. */
+  section: SectionView | null;
   cameraRef: Ref<CameraCommands>;
   keyTarget: HTMLElement | null;
+  /** The clearance label, moved onto the gap while the section is shown. */
+  gapLabel: RefObject<HTMLElement | null>;
 }
 
 function faceSize(kit: PreviewKit): number {
@@ -30,18 +34,35 @@ function faceSize(kit: PreviewKit): number {
   return Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys));
 }
 
+const NO_CLIPS: PartClips = { all: [], parts: [], A: [], B: [] };
+
+/**
+ * The section plane y = `y`, keeping y ≥ `y` (the camera looks at the cut from the −y side), for everything. Keys,
+ * rails and cutters also end `reach` mm behind it, and each cutter is trimmed to its own half: a pocket cutter pokes
+ * 1 mm past the face so the subtraction leaves no skin, which would otherwise show as the other half's fill.
+ */
+function sectionClips(y: number, reach: number): PartClips {
+  const cut = new Plane(new Vector3(0, 1, 0), -y);
+  const far = new Plane(new Vector3(0, -1, 0), y + reach);
+  return {
+    all: [cut],
+    parts: [cut, far],
+    A: [cut, far, new Plane(new Vector3(0, 0, -1), 0)],
+    B: [cut, far, new Plane(new Vector3(0, 0, 1), 0)],
+  };
+}
+
 /** The 3D view of a built kit. Draws only; every solid arrives ready-made from the preview worker. */
-export function KitCanvas({ kit, buildId, mode, sectionY, cameraRef, keyTarget }: KitCanvasProps) {
+export function KitCanvas({ kit, buildId, mode, section, cameraRef, keyTarget, gapLabel }: KitCanvasProps) {
   const size = faceSize(kit);
   const r = kit.manifest.request;
   const depth = r.joint === 'key' ? (kit.manifest.derived.pocketDepth ?? r.key.depth) : r.dovetail.height;
   const thickness = Math.max(10, depth * 1.8);
   const lift = mode === 'exploded' ? thickness * 0.9 : 0;
-  // Keep the half with y greater than the plane: the camera looks at the cut from the −y side.
-  const clip = useMemo(
-    () => (mode === 'section' ? [new Plane(new Vector3(0, 1, 0), -sectionY)] : []),
-    [mode, sectionY],
-  );
+  const cut = mode === 'section' && section ? section : null;
+  const cutY = cut?.y;
+  const reach = cut?.reach ?? 0;
+  const clips = useMemo(() => (cutY === undefined ? NO_CLIPS : sectionClips(cutY, reach)), [cutY, reach]);
   return (
     <Canvas
       frameloop="demand"
@@ -58,24 +79,27 @@ export function KitCanvas({ kit, buildId, mode, sectionY, cameraRef, keyTarget }
       <directionalLight position={[-size, size, -size]} intensity={0.4} />
       <group position={[0, 0, -lift]}>
         <FaceSlab
-          face={kit.manifest.request.face}
+          face={r.face}
           half="A"
           thickness={thickness}
           color={PREVIEW_COLORS.halfA}
-          clip={clip}
+          clip={clips.all}
+          section={Boolean(cut)}
         />
       </group>
       <group position={[0, 0, lift]}>
         <FaceSlab
-          face={kit.manifest.request.face}
+          face={r.face}
           half="B"
           thickness={thickness}
           color={PREVIEW_COLORS.halfB}
-          clip={clip}
+          clip={clips.all}
+          section={Boolean(cut)}
         />
       </group>
-      <KitParts kit={kit} lift={lift} clip={clip} />
-      <CameraRig size={size} ref={cameraRef} keyTarget={keyTarget} />
+      <KitParts kit={kit} lift={lift} clips={clips} section={Boolean(cut)} />
+      <CameraRig size={size} ref={cameraRef} keyTarget={keyTarget} section={cut} />
+      {cut && <GapPin x={cut.gapX} y={cut.y} z={cut.gapZ} label={gapLabel} />}
       <ShownMark buildId={buildId} />
     </Canvas>
   );

@@ -1,9 +1,12 @@
-import { useRef, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import type { PreviewState } from '../../hooks/use-preview-build';
-import { withUnit, type LengthUnit } from '../../lib/units';
+import { sectionView } from '../../lib/section-view';
+import type { LengthUnit } from '../../lib/units';
 import type { CameraCommands } from './camera-rig';
 import { CanvasBoundary } from './canvas-boundary';
 import { KitCanvas, type ViewMode } from './kit-canvas';
+import { PREVIEW_COLORS } from './preview-colors';
+import { GapLabel, SectionCaption } from './section-labels';
 import { ViewToolbar } from './view-toolbar';
 
 interface PreviewPanelProps {
@@ -26,17 +29,9 @@ export function PreviewPanel({ preview, unit, formInvalid }: PreviewPanelProps) 
   const [frame, setFrame] = useState<HTMLDivElement | null>(null);
   const camera = useRef<CameraCommands>(null);
   const built = preview.built;
-  const positions = built?.kit.manifest.parts.find((p) => p.positions)?.positions ?? [];
-  const request = built?.kit.manifest.request;
-  const sectionY = request?.joint === 'key' ? (positions[0]?.[1] ?? 0) : 0;
-  const sectionX = positions[0]?.[0] ?? 0;
-  // Frame one key or rail and its neighbourhood, close enough that a tenth of a millimetre shows.
-  const sectionSpan =
-    request?.joint === 'key'
-      ? Math.max(request.key.width, request.key.depth)
-      : request
-        ? request.dovetail.rootWidth + request.dovetail.height
-        : 10;
+  const gapLabel = useRef<HTMLDivElement>(null);
+  const kit = built?.kit;
+  const section = useMemo(() => (kit ? sectionView(kit) : null), [kit]);
   const stale = preview.busy || formInvalid || Boolean(preview.failure);
   return (
     <section aria-labelledby="preview-title" className="space-y-3">
@@ -59,14 +54,7 @@ export function PreviewPanel({ preview, unit, formInvalid }: PreviewPanelProps) 
           {statusText(preview, formInvalid)}
         </p>
       </div>
-      <ViewToolbar
-        mode={mode}
-        onMode={(m) => {
-          setMode(m);
-          if (m === 'section') camera.current?.lookAtSection(sectionX, sectionY, sectionSpan);
-        }}
-        camera={camera}
-      />
+      <ViewToolbar mode={mode} onMode={setMode} camera={camera} />
       <div
         ref={setFrame}
         tabIndex={0}
@@ -82,33 +70,38 @@ export function PreviewPanel({ preview, unit, formInvalid }: PreviewPanelProps) 
               kit={built.kit}
               buildId={built.id}
               mode={mode}
-              sectionY={sectionY}
+              section={section}
               cameraRef={camera}
               keyTarget={frame}
+              gapLabel={gapLabel}
             />
           )}
         </CanvasBoundary>
-        {built && mode === 'section' && (
-          <p
-            className="absolute top-3 left-3 max-w-[80%] rounded-md bg-paper/95 px-3 py-2 text-sm text-ink shadow"
-            data-testid="section-label"
-          >
-            Cut at y = {withUnit(sectionY, unit)} through the{' '}
-            {built.kit.manifest.request.joint === 'key' ? 'keys' : 'rails'}:{' '}
-            <strong>clearance {withUnit(built.kit.manifest.clearancePerSide, unit)} per side</strong> between{' '}
-            {built.kit.manifest.request.joint === 'key' ? 'each key and its pocket wall' : 'each rail and its slot'}.
-          </p>
+        {built && mode === 'section' && section && (
+          <GapLabel clearance={built.kit.manifest.clearancePerSide} unit={unit} pin={gapLabel} />
         )}
       </div>
+      {built && mode === 'section' && section && (
+        <SectionCaption manifest={built.kit.manifest} section={section} unit={unit} />
+      )}
       <p id="preview-help" className="sr-only">
         Half A below the cut face and half B above it, drawn see-through so the pockets and keys show. Drag to turn,
-        right-drag or arrow keys to pan, wheel to zoom; the buttons above do the same.
+        right-drag or arrow keys to pan, wheel to zoom; the buttons above do the same. Cut through shows a section
+        through one key or rail, looking square at the cut.
       </p>
       <ul className="flex flex-wrap gap-x-5 gap-y-1 text-sm text-ink" aria-label="Colour key">
-        <Legend color="#3f5f72" label="Half A (below the cut)" />
-        <Legend color="#b0764a" label="Half B (above the cut)" />
-        <Legend color="#3d6a4c" label={built?.kit.manifest.request.joint === 'dovetail' ? 'Rails' : 'Keys'} />
-        <Legend color="#a8471f" label={built?.kit.manifest.request.joint === 'dovetail' ? 'Slots' : 'Pockets'} />
+        <Legend color={PREVIEW_COLORS.halfA} label="Half A (below the cut)" />
+        <Legend color={PREVIEW_COLORS.halfB} label="Half B (above the cut)" />
+        <Legend
+          color={PREVIEW_COLORS.key}
+          label={built?.kit.manifest.request.joint === 'dovetail' ? 'Rails' : 'Keys'}
+        />
+        {mode !== 'section' && (
+          <Legend
+            color={PREVIEW_COLORS.pocket}
+            label={built?.kit.manifest.request.joint === 'dovetail' ? 'Slots' : 'Pockets'}
+          />
+        )}
       </ul>
     </section>
   );
