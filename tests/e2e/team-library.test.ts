@@ -129,7 +129,7 @@ describe('team library', () => {
 
     // The switcher holds both teams: the personal one has no presets, the owner's has the new one.
     const presetsTable = inviteePage.getByRole('table', { name: 'Presets' });
-    // The header's switcher: its label wraps the select, so its name goes on with the chosen team.
+    // The header's team switcher.
     const switcher = inviteePage.getByRole('banner').getByRole('combobox', { name: /^Team\b/ });
     await inviteePage.goto('/presets');
     await switcher.selectOption({ label: `${invitee.name}'s workshop (owner)` });

@@ -5,13 +5,16 @@ import { CreateTeamForm } from '../../features/team/components/create-team-form'
 import { InvitationsList } from '../../features/team/components/invitations-list';
 import { InviteForm } from '../../features/team/components/invite-form';
 import { MembersTable } from '../../features/team/components/members-table';
+import { useTeamDetail } from '../../features/team/api/team-detail';
+import { TeamSettings } from '../../features/team/components/team-settings';
 import { useCurrentTeam, useMe } from '../../lib/session';
 import { RequireSignIn } from './require-sign-in';
 
 function TeamPage() {
   const { data: me } = useMe();
   const { data: account } = useAccount();
-  const { team, switchTo } = useCurrentTeam();
+  const { team, teams, switchTo } = useCurrentTeam();
+  const { data: detail } = useTeamDetail(team?.id ?? '');
   if (!me || !team) return null;
   const isOwner = team.role === 'owner';
   return (
@@ -37,6 +40,18 @@ function TeamPage() {
             <h3 className="pt-2 font-bold">Pending invitations</h3>
             <InvitationsList teamId={team.id} />
           </section>
+          {detail && detail.id === team.id && (
+            <section aria-labelledby="team-settings" className="space-y-3">
+              <h2 id="team-settings" className="text-lead font-bold">
+                Team settings
+              </h2>
+              <TeamSettings
+                key={detail.id}
+                team={detail}
+                onDeleted={() => switchTo(teams.find((t) => t.id !== team.id)?.id ?? '')}
+              />
+            </section>
+          )}
           <section aria-labelledby="audit" className="space-y-3">
             <h2 id="audit" className="text-lead font-bold">
               Audit log

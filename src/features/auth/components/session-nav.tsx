@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { useCurrentTeam, useMe } from '../../../lib/session';
 import { useSignOut } from '../api/sign-out';
@@ -6,6 +7,7 @@ import { useSignOut } from '../api/sign-out';
 export function SessionNav() {
   const { data: me, isPending } = useMe();
   const { team, teams, switchTo } = useCurrentTeam();
+  const switcherId = useId();
   const signOut = useSignOut();
   const navigate = useNavigate();
   if (isPending) return null;
@@ -23,9 +25,13 @@ export function SessionNav() {
   }
   return (
     <div className="flex flex-wrap items-center gap-3">
-      <label className="flex items-center gap-2 text-sm">
-        <span className="text-ink-soft">Team</span>
+      {/* A label beside the select (not around it), so the select's name is "Team", not its current value too. */}
+      <div className="flex items-center gap-2 text-sm">
+        <label htmlFor={switcherId} className="text-ink-soft">
+          Team
+        </label>
         <select
+          id={switcherId}
           value={team?.id ?? ''}
           onChange={(e) => switchTo(e.target.value)}
           className="rounded-md border border-ink-faint bg-white px-2 py-1 text-ink"
@@ -36,7 +42,7 @@ export function SessionNav() {
             </option>
           ))}
         </select>
-      </label>
+      </div>
       <Link to="/account" className="font-medium underline-offset-4 hover:underline" title={me.user.email}>
         {me.user.name}
       </Link>

@@ -1,0 +1,35 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { teamDetailSchema, type TeamInput } from '../../../../shared/schemas/team';
+import { apiFetch } from '../../../lib/api-client';
+import { meQueryKey } from '../../../lib/session';
+import { teamKeys } from './keys';
+
+/** GET /api/teams/:teamId: the team with whether it is someone's personal team. */
+export const useTeamDetail = (teamId: string) =>
+  useQuery({
+    queryKey: teamKeys.detail(teamId),
+    queryFn: async () => teamDetailSchema.parse(await apiFetch(`/teams/${teamId}`)),
+    enabled: teamId !== '',
+  });
+
+/** PATCH /api/teams/:teamId {name} (owners): the header and switcher show the new name at once. */
+export function useRenameTeam(teamId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: TeamInput) =>
+      teamDetailSchema.parse(await apiFetch(`/teams/${teamId}`, { method: 'PATCH', body: JSON.stringify(input) })),
+    onSuccess: (team) => {
+      queryClient.setQueryData(teamKeys.detail(teamId), team);
+      return queryClient.invalidateQueries({ queryKey: meQueryKey });
+    },
+  });
+}
+
+/** DELETE /api/teams/:teamId (owners; never a personal team): the team and its whole library go. */
+export function useDeleteTeam(teamId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiFetch(`/teams/${teamId}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: meQueryKey }),
+  });
+}
