@@ -47,11 +47,17 @@ export function useSaveUnits() {
 }
 
 /**
- * The signed-in account's units (undefined while loading or when nobody is signed in) and a saver.
+ * The signed-in account's units (undefined while loading or when nobody is signed in), a saver and the
+ * last save's failure.
  * Pass `enabled: false` when nobody is signed in: GET /api/account would only answer 401.
  */
-export function useUnitsPreference(enabled = true): { units: Units | undefined; save: (units: Units) => void } {
+export function useUnitsPreference(enabled = true): {
+  units: Units | undefined;
+  save: (units: Units) => void;
+  /** Why the last save failed (the choice went back), or null. */
+  saveError: string | null;
+} {
   const { data } = useQuery({ ...accountQueryOptions(), enabled });
-  const { mutate } = useSaveUnits();
-  return { units: enabled ? data?.units : undefined, save: mutate };
+  const { mutate, error } = useSaveUnits();
+  return { units: enabled ? data?.units : undefined, save: mutate, saveError: error?.message ?? null };
 }

@@ -53,6 +53,11 @@ describe('units', () => {
     await poll(() => page.getByRole('alert').innerText()).toContain('The bench is closed.');
     await poll(() => page.getByRole('radio', { name: 'Millimetres' }).isChecked()).toBe(true);
     expect(await inches.isChecked()).toBe(false);
+    // The design screen's switch says so too.
+    await page.goto('/design');
+    await page.getByText('Inches', { exact: true }).click();
+    await poll(() => page.getByText('Your choice of units was not saved: The bench is closed.').count()).toBe(1);
+    await poll(() => page.getByRole('radio', { name: 'Millimetres' }).isChecked()).toBe(true);
   });
 
   it('saves inches from the account page with the keyboard, for this account', async () => {

@@ -23,7 +23,7 @@ import { WarningsAndCautions } from './warnings-and-cautions';
  * @param library - the current team's presets and printer profiles when someone is signed in, else null
  */
 export function DesignScreen({ library }: { library: DesignLibrary | null }) {
-  const { unit, setUnit } = useUnits();
+  const { unit, setUnit, saveError } = useUnits();
   const form = useForm<DesignValues>({ resolver: designResolver, defaultValues: DEFAULT_DESIGN, mode: 'onChange' });
   const values = useWatch({ control: form.control }) as DesignValues;
   const presets = useDesignPresets(form, library);
@@ -54,7 +54,7 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
             Change any setting and the preview follows. Lengths in {unit === 'mm' ? 'millimetres' : 'inches'}.
           </p>
         </div>
-        <UnitSwitch unit={unit} onChange={setUnit} />
+        <UnitSwitch unit={unit} onChange={setUnit} saveError={saveError} />
       </header>
       <div className="grid gap-8 lg:grid-cols-[minmax(20rem,26rem)_1fr]">
         <div className="space-y-6 rounded-card border border-paper-deep bg-white/50 p-4 sm:p-5">

@@ -1,7 +1,29 @@
 import type { LengthUnit } from '../lib/units';
 
 /** Millimetres or inches for every length on the screen; values are kept in mm, so nothing drifts. */
-export function UnitSwitch({ unit, onChange }: { unit: LengthUnit; onChange: (u: LengthUnit) => void }) {
+export function UnitSwitch({
+  unit,
+  onChange,
+  saveError = null,
+}: {
+  unit: LengthUnit;
+  onChange: (u: LengthUnit) => void;
+  /** The account did not keep the last choice: it went back, say why. */
+  saveError?: string | null;
+}) {
+  return (
+    <div className="space-y-1">
+      <UnitChoices unit={unit} onChange={onChange} />
+      {saveError && (
+        <p role="alert" className="max-w-xs text-sm font-medium text-kiln">
+          Your choice of units was not saved: {saveError}
+        </p>
+      )}
+    </div>
+  );
+}
+
+function UnitChoices({ unit, onChange }: { unit: LengthUnit; onChange: (u: LengthUnit) => void }) {
   return (
     <fieldset className="flex items-center gap-2">
       <legend className="sr-only">Units</legend>

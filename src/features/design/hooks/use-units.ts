@@ -18,7 +18,7 @@ const readGuest = () => window.localStorage.getItem(GUEST_KEY);
  * server, so every browser agrees; the screen follows a change at once). Signed out, it is remembered
  * on this browser.
  */
-export function useUnits(): { unit: LengthUnit; setUnit: (unit: LengthUnit) => void } {
+export function useUnits(): { unit: LengthUnit; setUnit: (unit: LengthUnit) => void; saveError: string | null } {
   const { data: me } = useMe();
   const signedIn = Boolean(me);
   const account = useUnitsPreference(signedIn);
@@ -34,5 +34,5 @@ export function useUnits(): { unit: LengthUnit; setUnit: (unit: LengthUnit) => v
   );
   // Until the account has loaded, millimetres: the stored default of every account.
   const chosen = signedIn ? account.units : guest;
-  return { unit: chosen === 'in' ? 'in' : 'mm', setUnit };
+  return { unit: chosen === 'in' ? 'in' : 'mm', setUnit, saveError: signedIn ? account.saveError : null };
 }
