@@ -52,8 +52,10 @@ export async function seedTeamLibrary(
 
   for (const kit of demoKits) {
     const source = demoPresets.find((p) => p.preset.name === kit.preset)!;
+    // The kit is built from the preset's current version, the one the history names.
+    const settings = source.edits?.at(-1)?.settings ?? source.preset.settings;
     const input = recordKitSchema.parse({
-      request: { ...source.preset.settings, face: kit.face },
+      request: { ...settings, face: kit.face },
       presetId: presetIds.get(kit.preset),
     });
     const { id } = await recordKit(tx, people[kit.by], teamId, input);

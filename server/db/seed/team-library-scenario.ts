@@ -53,6 +53,8 @@ export const demoPresets: {
           material: 'PLA',
           fit: 'snug',
           key: { shape: 'square', width: 12, depth: 8, count: 6 },
+          // The studio's own white PLA (a team material below) prints a touch fat.
+          materialTuning: { name: 'Bone-white PLA', clearanceAdjustment: 0.01 },
         },
       },
     ],
