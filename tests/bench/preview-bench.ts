@@ -5,11 +5,11 @@ import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { pino } from 'pino';
-import type { Page } from 'playwright-core';
 import { createApp } from '../../server/app';
 import { createDatabase } from '../../server/db/client';
 import { migrateDatabase } from '../../server/db/migrate';
 import { launchChromium } from '../helpers/chromium-launch';
+import { upToDate } from '../e2e/design-page';
 import { medianOf, summarize, timeEdits, type PreviewTiming } from './preview-timing';
 
 const TARGET_MS = 50;
@@ -21,10 +21,6 @@ const clientDir = path.resolve(import.meta.dirname, '..', '..', process.env.SEAM
 
 /** Alternating values, so every edit changes the kit. */
 const cycle = (values: string[]) => Array.from({ length: EDITS }, (_, i) => values[i % values.length]!);
-
-async function reachBuilt(p: Page) {
-  await p.getByTestId('preview-status').getByText('Up to date.').waitFor({ timeout: 30_000 });
-}
 
 function report(name: string, timings: PreviewTiming[]) {
   const shown = medianOf(timings, (t) => t.fromInput);
@@ -47,7 +43,7 @@ try {
     baseURL: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
   });
   await page.goto('/design');
-  await reachBuilt(page);
+  await upToDate(page, 30_000);
   // Warm-up edits, not reported: the first builds also compile the page's and the worker's code.
   await timeEdits(page, 'Depth into each half', ['9', '7', '9', '7', '10']);
   console.log('Preview update time in Debian Chromium (software WebGL), the design screen as a visitor uses it:');
@@ -58,7 +54,7 @@ try {
   // The section view clips every solid twice (faces and cut surfaces): the same kit, cut through a key.
   await page.getByRole('button', { name: 'Cut through' }).click();
   await page.getByLabel('Depth into each half', { exact: true }).fill('10');
-  await reachBuilt(page);
+  await upToDate(page, 30_000);
   report(
     '8 square 10 mm keys, cut through a key',
     await timeEdits(page, 'Depth into each half', cycle(['6', '7', '8', '9'])),
@@ -68,12 +64,12 @@ try {
   await page.getByLabel('Key diameter').fill('8');
   // Off the cycle's values, so its first edit changes the kit.
   await page.getByLabel('Depth into each half', { exact: true }).fill('10');
-  await reachBuilt(page);
+  await upToDate(page, 30_000);
   report('8 round 8 mm keys, 80 × 60 face', await timeEdits(page, 'Depth into each half', cycle(['6', '7', '8', '9'])));
   await page.getByText('Sliding dovetail', { exact: true }).click();
   await page.getByLabel('Face width (x)').fill('90');
   await page.getByLabel('Rail height', { exact: true }).fill('8');
-  await reachBuilt(page);
+  await upToDate(page, 30_000);
   report('3 dovetail rails, 90 × 60 face', await timeEdits(page, 'Rail height', cycle(['4', '5', '6', '7'])));
 } finally {
   await browser.close();

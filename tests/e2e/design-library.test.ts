@@ -8,6 +8,7 @@ import { presetPageSchema, presetSchema } from '../../shared/schemas/preset';
 import { presetVersionListSchema } from '../../shared/schemas/preset-version';
 import { printerProfileSchema } from '../../shared/schemas/printer-profile';
 import { screenshot, seriousAxeViolations, useBrowserApp } from '../helpers/browser';
+import { upToDate } from './design-page';
 
 // The design screen with a signed-in team: printer profiles feed the fit engine, presets load into the
 // form and save back as new presets or versions, and a stale save keeps both versions.
@@ -18,10 +19,6 @@ let page: Page;
 let teamId: string;
 let profileId: string;
 let presetId: string;
-
-async function upToDate(p: Page) {
-  await p.getByTestId('preview-status').getByText('Up to date.').waitFor({ timeout: 20_000 });
-}
 
 /** The reply, checked against the API's own schema. */
 async function json<S extends z.ZodType>(

@@ -2,16 +2,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import JSZip from 'jszip';
 import type { BrowserContext, Page } from 'playwright-core';
 import { screenshot, useBrowserApp } from '../helpers/browser';
+import { upToDate } from './design-page';
 import { pixelsUnlike } from './canvas-pixels';
 
 const app = useBrowserApp();
 let context: BrowserContext;
 let page: Page;
-
-/** Waits until the preview shows a build of the form as it is now. */
-async function upToDate(p: Page) {
-  await p.getByTestId('preview-status').getByText('Up to date.').waitFor({ timeout: 20_000 });
-}
 
 async function fill(p: Page, label: string, value: string) {
   const field = p.getByLabel(label, { exact: true });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { screenshot, useBrowserApp } from '../helpers/browser';
+import { upToDate } from './design-page';
 import { pixelsUnlike } from './canvas-pixels';
 
 const app = useBrowserApp();
@@ -15,10 +16,6 @@ const FILLS: Record<string, [number, number, number]> = {
   B: [0xa8, 0x6f, 0x44],
   key: [0x3d, 0x6a, 0x4c],
 };
-
-async function upToDate(p: Page) {
-  await p.getByTestId('preview-status').getByText('Up to date.').waitFor({ timeout: 20_000 });
-}
 
 /** Where the gap pin points, in canvas pixels: GapPin moves the label with `translate(x px, y px)`. */
 async function gapPoint(p: Page): Promise<{ x: number; y: number }> {

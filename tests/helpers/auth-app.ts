@@ -1,3 +1,4 @@
+import { mailbox } from './mailbox';
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll } from 'vitest';
 import { pino } from 'pino';
@@ -49,24 +50,6 @@ export function useAuthApp(rateLimits: Partial<AuthRateLimits> = {}) {
     await pool.end();
   });
   return { app, db, pool, sessions: createSessions(db), mail: mailbox(() => outbox.messages()) };
-}
-
-/** Reads captured mail, waiting briefly for messages that are sent after the reply. */
-function mailbox(messages: () => CapturedMail[]) {
-  return {
-    all: messages,
-    async waitFor(to: string, subject: RegExp, timeoutMs = 5_000): Promise<CapturedMail> {
-      const until = Date.now() + timeoutMs;
-      for (;;) {
-        const match = messages().find(
-          (m) => m.to.some((a) => a.toLowerCase() === to.toLowerCase()) && subject.test(m.subject),
-        );
-        if (match) return match;
-        if (Date.now() > until) throw new Error(`no mail to ${to} with a subject matching ${subject}`);
-        await new Promise((r) => setTimeout(r, 25));
-      }
-    },
-  };
 }
 
 /** The token in a mailed link (it sits in the URL fragment). */

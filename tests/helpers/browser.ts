@@ -6,6 +6,7 @@ import { afterAll, beforeAll } from 'vitest';
 import { pino } from 'pino';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { CHROMIUM, launchChromium } from './chromium-launch';
+import { mailbox } from './mailbox';
 import { createApp } from '../../server/app';
 import { createDatabase } from '../../server/db/client';
 import { defaultAuthSettings } from '../../server/config/auth-settings';
@@ -102,17 +103,9 @@ export function useBrowserApp(options: BrowserAppOptions = {}): BrowserApp {
     },
     mail: {
       all: messages,
-      async waitFor(to, subject, timeoutMs = 10_000) {
+      waitFor(to, subject, timeoutMs = 10_000) {
         if (!options.mail) throw new Error('mail is dropped: call useBrowserApp({ mail: true })');
-        const until = Date.now() + timeoutMs;
-        for (;;) {
-          const match = messages().find(
-            (m) => m.to.some((a) => a.toLowerCase() === to.toLowerCase()) && subject.test(m.subject),
-          );
-          if (match) return match;
-          if (Date.now() > until) throw new Error(`no mail to ${to} with a subject matching ${subject}`);
-          await new Promise((r) => setTimeout(r, 50));
-        }
+        return mailbox(messages).waitFor(to, subject, timeoutMs);
       },
     },
   };
