@@ -100,6 +100,8 @@ describe('design screen with a team library', () => {
     await expect
       .poll(() => page.getByText('for Chalk-white PLA (a team material based on PLA)').count())
       .toBeGreaterThan(0);
+    // Both the team material and the printer's calibration adjust the clearance: the form says so.
+    await expect.poll(() => page.getByTestId('calibration-and-material').count()).toBe(1);
     await page.getByLabel('Material', { exact: true }).selectOption('PETG');
     await expect.poll(() => page.getByLabel('Team material').inputValue()).toBe('');
     await page.getByLabel('Material', { exact: true }).selectOption('PLA');

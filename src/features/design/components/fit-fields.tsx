@@ -108,7 +108,14 @@ export function FitFields({ control, setValue, unit, team }: FitFieldsProps) {
           hint="Gap between key and pocket wall on each side."
         />
       )}
-      {team && <PrinterField control={control} profiles={team.printerProfiles} unit={unit} />}
+      {team && (
+        <PrinterField
+          control={control}
+          profiles={team.printerProfiles}
+          teamMaterials={team.teamMaterials}
+          unit={unit}
+        />
+      )}
       {!printerProfileId && (
         <NumberField
           control={control}

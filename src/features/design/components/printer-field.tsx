@@ -11,6 +11,7 @@ const linkClass = 'font-medium text-ink underline underline-offset-4';
 interface PrinterFieldProps {
   control: Control<DesignValues>;
   profiles: TeamChoices['printerProfiles'];
+  teamMaterials: TeamChoices['teamMaterials'];
   unit: LengthUnit;
 }
 
@@ -21,11 +22,12 @@ const signed = (mm: number, unit: LengthUnit) =>
  * The team's printer profiles for the chosen process. A chosen profile's calibration for this material and
  * fit replaces the typed correction, in the preview and in the downloaded kit alike.
  */
-export function PrinterField({ control, profiles, unit }: PrinterFieldProps) {
-  const [process, material, fit, profileId] = useWatch({
+export function PrinterField({ control, profiles, teamMaterials, unit }: PrinterFieldProps) {
+  const [process, material, fit, profileId, teamMaterialId] = useWatch({
     control,
-    name: ['process', 'material', 'fit', 'printerProfileId'],
+    name: ['process', 'material', 'fit', 'printerProfileId', 'teamMaterialId'],
   });
+  const teamMaterial = teamMaterials.find((m) => m.id === teamMaterialId && m.baseMaterial === material);
   const mine = profiles.filter((p) => p.process === process);
   const chosen = mine.find((p) => p.id === profileId) ?? null;
   const calibration = chosen ? profileCalibration(chosen, material, fit) : null;
@@ -45,6 +47,13 @@ export function PrinterField({ control, profiles, unit }: PrinterFieldProps) {
         <p className="text-sm text-ink-soft" data-testid="printer-calibration">
           {chosen.name} needs {signed(calibration.offsetMm, unit)} {unitWord} per side for {material} {fit} fits (from
           its calibration table).
+        </p>
+      )}
+      {calibration && teamMaterial && (teamMaterial.clearanceAdjustments[fit] ?? 0) !== 0 && (
+        <p className="text-sm text-ink-soft" data-testid="calibration-and-material">
+          Both apply: {teamMaterial.name}’s own adjustment and this printer’s calibration for {material}. If that
+          calibration was measured with {teamMaterial.name} itself, it already includes the difference: set Team
+          material above to None so it is not counted twice.
         </p>
       )}
       {chosen && !calibration && (
