@@ -6,9 +6,21 @@ import { fail, say } from './log.mjs';
 
 export function buildClient() {
   say('building the client (vite build)…');
-  const r = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', process.env.SEAMWRIGHT_DIST ?? 'dist', '--emptyOutDir'], {
-    cwd: root,
-    stdio: 'inherit',
-  });
+  const r = spawnSync(
+    process.execPath,
+    [
+      'node_modules/vite/bin/vite.js',
+      'build',
+      '--logLevel',
+      'warn',
+      '--outDir',
+      process.env.SEAMWRIGHT_DIST ?? 'dist',
+      '--emptyOutDir',
+    ],
+    {
+      cwd: root,
+      stdio: 'inherit',
+    },
+  );
   if (r.status !== 0) fail('the client build failed; see the messages above.');
 }

@@ -79,7 +79,17 @@ function PresetPage() {
   const { data: preset, isPending, error } = usePreset(team?.id ?? '', presetId);
   if (!team) return null;
   if (isPending) return <Notice>Loading the preset…</Notice>;
-  if (error) return <Notice tone="error">{error.message}</Notice>;
+  if (error) {
+    return (
+      <div className="space-y-4">
+        <h1 className="text-title font-bold">This preset could not be opened</h1>
+        <Notice tone="error">{error.message}</Notice>
+        <Link to="/presets" className="inline-block font-medium underline">
+          Back to all presets
+        </Link>
+      </div>
+    );
+  }
   const canEdit = team.role !== 'viewer';
   return (
     <div className="space-y-8">

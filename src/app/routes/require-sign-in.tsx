@@ -10,12 +10,15 @@ export function RequireSignIn({ children }: { children: ReactNode }) {
   if (isError) return <Notice tone="error">{error.message}</Notice>;
   if (!me) {
     return (
-      <Notice>
-        <Link to="/sign-in" className="font-medium underline">
-          Sign in
-        </Link>{' '}
-        to see this page.
-      </Notice>
+      <div className="space-y-4">
+        <h1 className="text-title font-bold">Sign in to continue</h1>
+        <Notice>
+          <Link to="/sign-in" className="font-medium underline">
+            Sign in
+          </Link>{' '}
+          to see this page.
+        </Notice>
+      </div>
     );
   }
   return <>{children}</>;

@@ -10,6 +10,7 @@ import {
 import type { ReactNode } from 'react';
 import { Button } from './button';
 import { Notice } from './notice';
+import { ScrollX } from './scroll-x';
 
 /** The features every server-driven table uses: sorting and paging, both done by the API. */
 export const dataTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature });
@@ -79,51 +80,53 @@ export function DataTable<T extends RowData>({
   const pages = Math.max(1, Math.ceil(total / view.pageSize));
   return (
     <div className="space-y-3">
-      <table className="w-full text-left" aria-busy={isLoading}>
-        <caption className="sr-only">{caption}</caption>
-        <thead className="border-b border-ink-faint text-sm text-ink-soft">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const sorted = header.column.getIsSorted();
-                const canSort = header.column.getCanSort();
-                const label = header.isPlaceholder ? null : <table.FlexRender header={header} />;
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    className="py-2 pr-3"
-                    aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
-                  >
-                    {canSort ? (
-                      <button
-                        type="button"
-                        className="font-medium hover:text-ink"
-                        onClick={header.column.getToggleSortingHandler()}
-                      >
-                        {label} {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                      </button>
-                    ) : (
-                      label
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-paper-deep align-top">
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="py-2 pr-3">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <ScrollX label={caption}>
+        <table className="w-full text-left" aria-busy={isLoading}>
+          <caption className="sr-only">{caption}</caption>
+          <thead className="border-b border-ink-faint text-sm text-ink-soft">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const canSort = header.column.getCanSort();
+                  const label = header.isPlaceholder ? null : <table.FlexRender header={header} />;
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      className="py-2 pr-3"
+                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+                    >
+                      {canSort ? (
+                        <button
+                          type="button"
+                          className="font-medium hover:text-ink"
+                          onClick={header.column.getToggleSortingHandler()}
+                        >
+                          {label} {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
+                        </button>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="border-b border-paper-deep align-top">
+                {row.getAllCells().map((cell) => (
+                  <td key={cell.id} className="py-2 pr-3">
+                    <table.FlexRender cell={cell} />
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ScrollX>
       {isLoading && !rows && <Notice>Loading…</Notice>}
       {!isLoading && rows?.length === 0 && <Notice>{empty}</Notice>}
       <nav aria-label={`${caption} pages`} className="flex flex-wrap items-center gap-3 text-sm">

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useRef } from 'react';
 import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
 import { fitClassSchema, materialSchema } from '../../../../shared/schemas/joint-options';
 import { printerProfileInputSchema, type PrinterProfileInput } from '../../../../shared/schemas/printer-profile';
@@ -27,6 +28,18 @@ export function PrinterProfileForm({
   const rows = useFieldArray({ control, name: 'calibration' });
   const { errors, isSubmitting } = formState;
   const isFdm = watch('process') === 'fdm';
+  // A resin printer has no nozzle: the hidden field must not keep the FDM value (the schema refuses it, and
+  // its message would have no field to sit beside). Switching back brings the last nozzle typed.
+  const lastNozzle = useRef(initial.nozzleDiameter ?? 0.4);
+  useEffect(() => {
+    const nozzle = form.getValues('nozzleDiameter');
+    if (!isFdm && nozzle !== null && nozzle !== undefined) {
+      lastNozzle.current = nozzle;
+      form.setValue('nozzleDiameter', null);
+    } else if (isFdm && (nozzle === null || nozzle === undefined)) {
+      form.setValue('nozzleDiameter', lastNozzle.current);
+    }
+  }, [isFdm, form]);
   const submit = handleSubmit(async (values) => {
     try {
       await onSubmit(values);
