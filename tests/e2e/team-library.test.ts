@@ -191,6 +191,8 @@ describe('team library', () => {
     await saveTheirs.waitFor();
 
     await ownerPage.goto(presetPath);
+    // The saved tags read back as typed, one comma and space apart.
+    await expect.poll(() => ownerPage.getByLabel('Tags').inputValue()).toBe('helmet, glued');
     await ownerPage.getByLabel('Material', { exact: true }).selectOption('PETG');
     await ownerPage.getByRole('button', { name: 'Save as version 2' }).click();
     await ownerPage.getByText('Saved as version 2.').waitFor();

@@ -7,6 +7,7 @@ import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { showApiError } from '../../../lib/form-errors';
 import { SettingsFields } from './settings-fields';
+import { TagsField } from './tags-field';
 
 interface Props {
   initial: PresetInput;
@@ -19,15 +20,6 @@ interface Props {
 }
 
 const FIELDS = ['name', 'description', 'tags', 'printerProfileId'] as const;
-const tagsFromText = {
-  setValueAs: (v: unknown) =>
-    typeof v === 'string'
-      ? v
-          .split(',')
-          .map((t) => t.trim())
-          .filter(Boolean)
-      : v,
-};
 
 /**
  * A preset's name, description, tags, printer and joint settings, checked by the API's own schema. The page
@@ -66,12 +58,7 @@ export function PresetForm({ initial, printers, submitLabel, disabled, disabledR
             {...register('description')}
           />
         </div>
-        <TextField
-          label="Tags"
-          hint="Separated by commas, e.g. helmet, glued"
-          registration={register('tags', tagsFromText)}
-          error={errors.tags as never}
-        />
+        <TagsField control={form.control} />
         <div className="space-y-1">
           <label htmlFor="preset-printer" className="block font-medium">
             Printer profile
