@@ -21,7 +21,7 @@ function PrinterFitTestsPage({ teamId, canEdit }: { teamId: string; canEdit: boo
       </header>
       {isPending && <Notice>Loading…</Notice>}
       {error && <Notice tone="error">This printer profile could not be loaded: {error.message}</Notice>}
-      {profile && <FitTestsPanel teamId={teamId} profile={profile} canEdit={canEdit} />}
+      {profile && <FitTestsPanel key={profile.id} teamId={teamId} profile={profile} canEdit={canEdit} />}
     </div>
   );
 }

@@ -5,6 +5,7 @@ import {
   type PrinterProfilePage,
 } from '../../../../shared/schemas/printer-profile';
 import { apiFetch } from '../../../lib/api-client';
+import { withProfileEdit } from '../lib/profile-edit';
 import { printerKeys } from './printer-profiles';
 
 /** POST …/printer-profiles, or PATCH …/printer-profiles/:id when `id` is given (editors, owners). */
@@ -15,11 +16,24 @@ export async function savePrinterProfile(teamId: string, body: PrinterProfileInp
   );
 }
 
+/**
+ * Creates a profile, or saves an edited one optimistically: the lists and the profile's own page show the
+ * change at once and get their old data back when the server refuses it (the form then shows its message).
+ */
 export function useSavePrinterProfile(teamId: string) {
   const queryClient = useQueryClient();
+  const all = { queryKey: printerKeys.all(teamId) };
   return useMutation({
     mutationFn: ({ body, id }: { body: PrinterProfileInput; id?: string }) => savePrinterProfile(teamId, body, id),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: printerKeys.all(teamId) }),
+    onMutate: async ({ body, id }) => {
+      if (!id) return undefined;
+      await queryClient.cancelQueries(all);
+      const previous = queryClient.getQueriesData<unknown>(all);
+      queryClient.setQueriesData<unknown>(all, (data: unknown) => withProfileEdit(data, id, body));
+      return { previous };
+    },
+    onError: (_e, _vars, context) => context?.previous.forEach(([key, data]) => queryClient.setQueryData(key, data)),
+    onSettled: () => queryClient.invalidateQueries(all),
   });
 }
 

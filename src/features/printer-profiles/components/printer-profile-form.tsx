@@ -1,15 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef } from 'react';
 import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
-import { fitClassSchema, materialSchema } from '../../../../shared/schemas/joint-options';
 import { printerProfileInputSchema, type PrinterProfileInput } from '../../../../shared/schemas/printer-profile';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { showApiError } from '../../../lib/form-errors';
+import { CalibrationRow } from './calibration-row';
 
 const cell = 'rounded-md border border-ink-faint bg-white px-2 py-1';
 const num = { setValueAs: (v: unknown) => (v === '' || v === null ? null : Number(v)) };
+const calibrationFields = ['material', 'fit', 'offsetMm', 'measuredOn', 'source'] as const;
 const today = () => new Date().toISOString().slice(0, 10);
 
 /** A printer profile: process, build volume, nozzle, layer height, notes and its calibration table. */
@@ -44,7 +45,11 @@ export function PrinterProfileForm({
     try {
       await onSubmit(values);
     } catch (error) {
-      showApiError(error, setError, ['name', 'nozzleDiameter', 'layerHeight']);
+      // The server's message lands beside its field; a calibration entry's too.
+      const entryFields = (form.getValues('calibration') ?? []).flatMap((_, i) =>
+        calibrationFields.map((f) => `calibration.${i}.${f}` as const),
+      );
+      showApiError(error, setError, ['name', 'nozzleDiameter', 'layerHeight', ...entryFields]);
     }
   });
   return (
@@ -98,48 +103,20 @@ export function PrinterProfileForm({
         {rows.fields.length === 0 && (
           <p className="text-sm text-ink-soft">No entries: the fit engine uses the published defaults.</p>
         )}
-        {rows.fields.map((field, i) => {
-          const e = errors.calibration?.[i];
-          return (
-            <div key={field.id} className="flex flex-wrap items-end gap-2">
-              <select aria-label="Material" className={cell} {...register(`calibration.${i}.material`)}>
-                {materialSchema.options.map((m) => (
-                  <option key={m}>{m}</option>
-                ))}
-              </select>
-              <select aria-label="Fit" className={cell} {...register(`calibration.${i}.fit`)}>
-                {fitClassSchema.options.map((f) => (
-                  <option key={f}>{f}</option>
-                ))}
-              </select>
-              <input
-                aria-label="Offset, mm per side"
-                className={`${cell} w-24`}
-                type="number"
-                step="0.01"
-                {...register(`calibration.${i}.offsetMm`, num)}
-              />
-              <input
-                aria-label="Measured on"
-                className={cell}
-                type="date"
-                {...register(`calibration.${i}.measuredOn`)}
-              />
-              <input aria-label="Source" className={cell} {...register(`calibration.${i}.source`)} />
-              <Button variant="quiet" onClick={() => rows.remove(i)}>
-                Remove
-              </Button>
-              {e && (
-                <p role="alert" className="w-full text-sm font-medium text-kiln">
-                  {Object.values(e)
-                    .map((x) => (x as { message?: string })?.message)
-                    .filter(Boolean)
-                    .join(' ')}
-                </p>
-              )}
-            </div>
-          );
-        })}
+        {rows.fields.map((field, i) => (
+          <CalibrationRow
+            key={field.id}
+            index={i}
+            register={register}
+            errors={errors.calibration?.[i]}
+            onRemove={() => rows.remove(i)}
+          />
+        ))}
+        {(errors.calibration?.message ?? errors.calibration?.root?.message) && (
+          <p role="alert" className="text-sm font-medium text-kiln">
+            {errors.calibration?.message ?? errors.calibration?.root?.message}
+          </p>
+        )}
         <Button
           variant="quiet"
           onClick={() =>
