@@ -7,7 +7,7 @@ import { listQueryFields, pageOf, queryId } from './library-list';
 /**
  * `POST /api/teams/:teamId/kits` body: the full kit request, and optionally the preset it came from (its
  * current version unless `presetVersion` says which), the printer profile whose calibration the fit
- * engine should use (default: the preset's printer profile), and the team material the kit is printed in
+ * engine should use (left out: the preset's printer profile; null: none), and the team material the kit is printed in
  * (`teamMaterialId`, default none): one of this team's materials whose base material is the request's
  * `material`; its clearance adjustment for the request's fit class replaces the built-in material's (the
  * server sets the request's `materialTuning` from it).
@@ -19,10 +19,11 @@ export const recordKitSchema = z.object({
     .nullable()
     .default(null),
   presetVersion: z.number().int().min(1).nullable().default(null),
+  // Left out: the preset's printer profile (if any). null: none, even when the preset names one.
   printerProfileId: z
     .uuid({ error: () => 'printerProfileId must be the id of a printer profile' })
     .nullable()
-    .default(null),
+    .optional(),
   teamMaterialId: z
     .uuid({ error: () => 'teamMaterialId must be the id of a team material' })
     .nullable()

@@ -93,7 +93,9 @@ async function teamMaterialOf(db: Executor, teamId: string, id: string | null) {
 export async function recordKit(db: Executor, user: SessionUser, teamId: string, input: ParsedRecordKitInput) {
   await requireTeamRole(db, teamId, user, 'viewer');
   const preset = await presetOf(db, teamId, input);
-  const profileId = input.printerProfileId ?? preset?.printerProfileId ?? null;
+  // An explicit null means "no printer", as the design screen's preview showed; only a missing field defers to
+  // the preset's printer.
+  const profileId = input.printerProfileId === undefined ? (preset?.printerProfileId ?? null) : input.printerProfileId;
   let profile: PrinterProfile | null = null;
   if (profileId) {
     profile = await findProfile(db, teamId, profileId);

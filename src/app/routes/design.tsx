@@ -28,6 +28,7 @@ export function DesignRoute() {
     return {
       teamId: team.id,
       teamName: team.name,
+      ready: presets.isSuccess && profiles.isSuccess && materials.isSuccess,
       canEdit: team.role !== 'viewer',
       presets: presets.data?.items.map(({ id, name, version }) => ({ id, name, version })) ?? [],
       printerProfiles: profiles.data?.items ?? [],
@@ -50,6 +51,15 @@ export function DesignRoute() {
         }
       },
     };
-  }, [team, presets.data, profiles.data, materials.data, refetch]);
+  }, [
+    team,
+    presets.data,
+    profiles.data,
+    materials.data,
+    presets.isSuccess,
+    profiles.isSuccess,
+    materials.isSuccess,
+    refetch,
+  ]);
   return <DesignScreen library={library} />;
 }

@@ -1,4 +1,4 @@
-import { useDeferredValue, useMemo } from 'react';
+import { useDeferredValue, useEffect, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { kitRequestSchema, type KitRequest } from '../../../../shared/schemas/kit-request';
 import { usePreviewBuild } from '../hooks/use-preview-build';
@@ -27,6 +27,14 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
   const form = useForm<DesignValues>({ resolver: designResolver, defaultValues: DEFAULT_DESIGN, mode: 'onChange' });
   const values = useWatch({ control: form.control }) as DesignValues;
   const presets = useDesignPresets(form, library);
+  // A printer profile or team material that is gone (deleted, another team's after a switch) is let go, so the
+  // typed correction and the catalogue material show again instead of a choice the select cannot show.
+  const staleProfile = Boolean(library?.ready && values.printerProfileId && !chosenProfile(values, library));
+  const staleMaterial = Boolean(library?.ready && values.teamMaterialId && !chosenTeamMaterial(values, library));
+  useEffect(() => {
+    if (staleProfile) form.setValue('printerProfileId', '', { shouldValidate: true });
+    if (staleMaterial) form.setValue('teamMaterialId', '', { shouldValidate: true });
+  }, [form, staleProfile, staleMaterial]);
   // Keyed on the request's text, so a re-render that changes nothing never asks for a new build. The chosen
   // team material and printer profile's calibration are part of it, as in the kit the server builds.
   const requestText = JSON.stringify(kitRequestOf(values, library));

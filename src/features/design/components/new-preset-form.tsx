@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import type { Preset } from '../../../../shared/schemas/preset';
@@ -13,14 +14,17 @@ const namingSchema = presetInputSchema.pick({ name: true, description: true });
 type Naming = z.input<typeof namingSchema>;
 
 interface NewPresetFormProps {
+  id: string;
   presets: ReturnType<typeof useDesignPresets>;
   onDone: (preset: Preset) => void;
   onCancel: () => void;
 }
 
 /** Names the design on screen and saves it as a new preset of the current team (the face is not saved). */
-export function NewPresetForm({ presets, onDone, onCancel }: NewPresetFormProps) {
+export function NewPresetForm({ id, presets, onDone, onCancel }: NewPresetFormProps) {
   const form = useForm<Naming>({ resolver: zodResolver(namingSchema), defaultValues: { name: '', description: '' } });
+  // The form opens where the name is typed.
+  useEffect(() => form.setFocus('name'), [form]);
   const { errors, isSubmitting } = form.formState;
   const submit = form.handleSubmit(async (fields) => {
     try {
@@ -31,6 +35,7 @@ export function NewPresetForm({ presets, onDone, onCancel }: NewPresetFormProps)
   });
   return (
     <form
+      id={id}
       aria-label="Save as a new preset"
       noValidate
       onSubmit={submit}

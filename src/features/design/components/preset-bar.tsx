@@ -29,6 +29,7 @@ type Status = { tone: 'success' | 'error'; text: string } | null;
  */
 export function PresetBar({ library, presets, currentText, invalid }: PresetBarProps) {
   const selectId = useId();
+  const namingId = useId();
   const [params, setParams] = useSearchParams();
   const [choice, setChoice] = useState('');
   const [busy, setBusy] = useState(false);
@@ -53,7 +54,7 @@ export function PresetBar({ library, presets, currentText, invalid }: PresetBarP
 
   // A link from a preset's page opens the design screen with that preset loaded, once.
   useEffect(() => {
-    if (!library || !linked || loadedLink.current === linked) return;
+    if (!library?.ready || !linked || loadedLink.current === linked) return;
     loadedLink.current = linked;
     void run(async () => {
       await load(linked);
@@ -117,7 +118,7 @@ export function PresetBar({ library, presets, currentText, invalid }: PresetBarP
         </div>
         <Button
           variant="quiet"
-          disabled={!choice || busy}
+          disabled={!choice || busy || !library.ready}
           onClick={() =>
             run(async () => {
               await load(choice);
@@ -136,7 +137,13 @@ export function PresetBar({ library, presets, currentText, invalid }: PresetBarP
               Save as version {origin.version + 1} of “{origin.name}”
             </Button>
           )}
-          <Button variant="quiet" disabled={busy || invalid} onClick={() => setNaming((n) => !n)}>
+          <Button
+            variant="quiet"
+            disabled={busy || invalid}
+            aria-expanded={naming}
+            aria-controls={namingId}
+            onClick={() => setNaming((n) => !n)}
+          >
             Save as a new preset…
           </Button>
         </div>
@@ -148,6 +155,7 @@ export function PresetBar({ library, presets, currentText, invalid }: PresetBarP
       {invalid && library.canEdit && <p className="text-sm text-ink-soft">Fix the marked settings to save.</p>}
       {naming && library.canEdit && (
         <NewPresetForm
+          id={namingId}
           presets={presets}
           onDone={(preset) => {
             setNaming(false);

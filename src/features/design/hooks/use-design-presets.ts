@@ -1,18 +1,18 @@
-import { useCallback, useState } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import type { Preset } from '../../../../shared/schemas/preset';
 import type { DesignLibrary, PresetOrigin } from '../lib/design-library';
 import type { DesignValues } from '../lib/design-values';
-import { chosenProfile, presetRequest, presetText, settingsOf, valuesFromPreset } from '../lib/preset-values';
+import { chosenProfile, presetRequest, savedPresetText, settingsOf, valuesFromPreset } from '../lib/preset-values';
 
 /** What saving the design as the next version of its preset ended in. */
 export type VersionSave = { kind: 'saved'; preset: Preset } | { kind: 'conflict'; current: Preset };
 
-const originOf = (preset: Preset, values: DesignValues, library: DesignLibrary | null): PresetOrigin => ({
+const originOf = (preset: Preset): PresetOrigin => ({
   id: preset.id,
   name: preset.name,
   version: preset.version,
-  settingsText: presetText(values, library),
+  settingsText: savedPresetText(preset),
 });
 
 const bodyOf = (values: DesignValues, library: DesignLibrary | null) => ({
@@ -33,7 +33,7 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
     (preset: Preset) => {
       const values = valuesFromPreset(form.getValues(), preset, library);
       form.reset(values);
-      setOrigin(originOf(preset, values, library));
+      setOrigin(originOf(preset));
     },
     [form, library],
   );
@@ -51,7 +51,7 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
       if (!library) throw new Error('Sign in to save presets.');
       const values = form.getValues();
       const preset = await library.createPreset({ ...fields, ...bodyOf(values, library) });
-      setOrigin(originOf(preset, values, library));
+      setOrigin(originOf(preset));
       return preset;
     },
     [library, form],
@@ -64,11 +64,15 @@ export function useDesignPresets(form: UseFormReturn<DesignValues>, library: Des
       const values = form.getValues();
       const result = await library.updatePreset(origin.id, { baseVersion, ...bodyOf(values, library) });
       if ('conflict' in result) return { kind: 'conflict', current: result.conflict };
-      setOrigin(originOf(result.saved, values, library));
+      setOrigin(originOf(result.saved));
       return { kind: 'saved', preset: result.saved };
     },
     [library, origin, form],
   );
+
+  // A preset belongs to one team: after a switch, the design no longer comes from one of this team's presets.
+  const teamId = library?.teamId ?? null;
+  useEffect(() => setOrigin(null), [teamId]);
 
   const forget = useCallback(() => setOrigin(null), []);
   return { origin, load, apply, saveNew, saveVersion, forget };

@@ -18,6 +18,8 @@ export interface PresetChoice {
 export interface DesignLibrary extends TeamChoices {
   readonly teamId: string;
   readonly teamName: string;
+  /** The presets, printer profiles and materials have loaded: a preset can be taken in without losing its printer. */
+  readonly ready: boolean;
   /** Editors and owners save presets; viewers only start from them. */
   readonly canEdit: boolean;
   readonly presets: readonly PresetChoice[];

@@ -21,6 +21,8 @@ export interface DesignValues {
   clearanceMode: 'derived' | 'set';
   clearance?: number;
   calibrationOffset?: number;
+  /** Whose a preset's saved correction was; sent with it while the correction is still that number. */
+  calibrationNote?: { offset: number; source: string };
   /** A printer profile of the current team whose calibration replaces the typed correction; '' for none. */
   printerProfileId: string;
   /** A team material based on `material` whose adjustments the fit engine uses; '' for the catalogue's. */
@@ -95,6 +97,10 @@ export function toKitRequest(v: DesignValues): KitRequest {
     clearance: v.clearanceMode === 'set' ? v.clearance : undefined,
     // With a printer profile chosen, its calibration entry is applied afterwards (see withProfileCalibration).
     calibrationOffset: v.printerProfileId ? undefined : v.calibrationOffset,
+    calibrationSource:
+      !v.printerProfileId && v.calibrationNote && v.calibrationNote.offset === v.calibrationOffset
+        ? v.calibrationNote.source
+        : undefined,
     // With a team material chosen, its tuning is applied afterwards (see withTeamMaterial).
     materialTuning: v.teamMaterialId ? undefined : v.materialTuning,
     format: v.format,

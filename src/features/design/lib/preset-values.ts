@@ -1,6 +1,8 @@
 import type { KitRequest } from '../../../../shared/schemas/kit-request';
 import type { TeamMaterial } from '../../../../shared/schemas/material';
-import type { PresetSettings, PresetSettingsInput } from '../../../../shared/schemas/preset-settings';
+import { kitRequestSchema } from '../../../../shared/schemas/kit-request';
+import type { Preset } from '../../../../shared/schemas/preset';
+import { withoutFace, type PresetSettings, type PresetSettingsInput } from '../../../../shared/schemas/preset-settings';
 import type { PrinterProfile } from '../../../../shared/schemas/printer-profile';
 import { profileCalibration } from '../../../../shared/library/profile-calibration';
 import { teamMaterialTuning } from '../../../../shared/library/team-material-tuning';
@@ -62,6 +64,10 @@ export function valuesFromPreset(
     clearanceMode: s.clearance === undefined ? 'derived' : 'set',
     clearance: s.clearance ?? current.clearance ?? DEFAULT_DESIGN.clearance,
     calibrationOffset: s.calibrationOffset,
+    calibrationNote:
+      s.calibrationOffset !== undefined && s.calibrationSource
+        ? { offset: s.calibrationOffset, source: s.calibrationSource }
+        : undefined,
     printerProfileId: profile?.id ?? '',
     teamMaterialId: material?.id ?? '',
     materialTuning: material ? undefined : s.materialTuning,
@@ -114,13 +120,29 @@ export function kitRequestOf(values: DesignValues, team: TeamChoices | null): Ki
   return withProfileCalibration(presetRequest(values, team), chosenProfile(values, team));
 }
 
+// Any valid face stands in while settings are checked; the face is no part of a preset.
+const STAND_IN_FACE = { shape: 'rect', width: 100, height: 100 } as const;
+
+/** Settings with every default applied, in the schema's key order, as text; "invalid" when they are not. */
+function settingsText(settings: unknown, printerProfileId: string | null): string {
+  const parsed = kitRequestSchema.safeParse({ ...(settings as object), face: STAND_IN_FACE });
+  const text = parsed.success ? JSON.stringify(withoutFace(parsed.data)) : 'invalid';
+  return `${text}|${printerProfileId ?? ''}`;
+}
+
 /**
- * The form's values as text that changes exactly when what a preset would save changes (settings and printer
- * profile), so the screen can say whether the design still matches the preset it came from.
+ * What a preset would save of the form (settings and printer profile), normalised, so it can be compared
+ * with {@link savedPresetText}: the screen says whether the design still matches the preset it came from.
  */
 export function presetText(values: DesignValues, team: TeamChoices | null): string {
-  return JSON.stringify({
-    settings: settingsOf(presetRequest(values, team)),
-    printerProfileId: chosenProfile(values, team)?.id ?? null,
-  });
+  return settingsText(settingsOf(presetRequest(values, team)), chosenProfile(values, team)?.id ?? null);
+}
+
+/**
+ * A preset as it is saved, normalised like {@link presetText}. Comparing with the preset as saved, not as the
+ * form took it in, shows anything the form could not keep (a printer profile that is gone, a team material
+ * whose adjustment changed since) as a change.
+ */
+export function savedPresetText(preset: Pick<Preset, 'settings' | 'printerProfileId'>): string {
+  return settingsText(preset.settings, preset.printerProfileId);
 }

@@ -19,8 +19,8 @@ export function materialFormValues(material: TeamMaterial): TeamMaterialInput {
 
 /**
  * The PATCH body for an edited material: only the fields whose parsed value differs from the material as
- * loaded, so an edit does not overwrite someone else's change to another field. The three clearance
- * adjustments travel together.
+ * loaded, so an edit does not overwrite someone else's change to another field — down to each fit class's
+ * clearance adjustment (the server keeps the fit classes a patch does not name).
  *
  * @returns the changed fields; an empty object when nothing changed
  */
@@ -30,8 +30,11 @@ export function materialChanges(material: TeamMaterial, values: ParsedTeamMateri
   if (values.name !== before.name) patch.name = values.name;
   if (values.baseMaterial !== before.baseMaterial) patch.baseMaterial = values.baseMaterial;
   if (values.shrinkagePercent !== before.shrinkagePercent) patch.shrinkagePercent = values.shrinkagePercent;
-  if (JSON.stringify(values.clearanceAdjustments) !== JSON.stringify(before.clearanceAdjustments)) {
-    patch.clearanceAdjustments = values.clearanceAdjustments;
+  const adjustments = (['press', 'snug', 'slide'] as const).filter(
+    (fit) => values.clearanceAdjustments[fit] !== before.clearanceAdjustments?.[fit],
+  );
+  if (adjustments.length > 0) {
+    patch.clearanceAdjustments = Object.fromEntries(adjustments.map((fit) => [fit, values.clearanceAdjustments[fit]]));
   }
   if (values.notes !== before.notes) patch.notes = values.notes;
   return patch;

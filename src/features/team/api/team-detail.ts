@@ -25,11 +25,19 @@ export function useRenameTeam(teamId: string) {
   });
 }
 
-/** DELETE /api/teams/:teamId (owners; never a personal team): the team and its whole library go. */
-export function useDeleteTeam(teamId: string) {
+/**
+ * DELETE /api/teams/:teamId (owners; never a personal team): the team and its whole library go. On success
+ * the user moves on first (`moveTo`) (this page unmounts when the team list changes, so nothing after that
+ * may depend on it), the deleted team's cached queries are dropped, and the team list is fetched again.
+ */
+export function useDeleteTeam(teamId: string, moveTo: () => void) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => apiFetch(`/teams/${teamId}`, { method: 'DELETE' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: meQueryKey }),
+    onSuccess: () => {
+      moveTo();
+      queryClient.removeQueries({ queryKey: ['teams', teamId] });
+      return queryClient.invalidateQueries({ queryKey: meQueryKey });
+    },
   });
 }

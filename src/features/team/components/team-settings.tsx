@@ -51,13 +51,15 @@ function RenameTeamForm({ team }: { team: TeamDetail }) {
       <Button type="submit" variant="quiet" disabled={formState.isSubmitting}>
         Rename
       </Button>
-      {saved && <p className="w-full text-sm text-moss">Renamed.</p>}
+      <p role="status" className="w-full text-sm text-moss">
+        {saved ? 'Renamed.' : ''}
+      </p>
     </form>
   );
 }
 
 function DeleteTeam({ team, onDeleted }: { team: TeamDetail; onDeleted: () => void }) {
-  const remove = useDeleteTeam(team.id);
+  const remove = useDeleteTeam(team.id, onDeleted);
   const [typed, setTyped] = useState('');
   return (
     <div className="space-y-3 rounded-md border border-kiln p-4">
@@ -83,7 +85,7 @@ function DeleteTeam({ team, onDeleted }: { team: TeamDetail; onDeleted: () => vo
       <Button
         variant="danger"
         disabled={typed.trim() !== team.name || remove.isPending}
-        onClick={() => remove.mutate(undefined, { onSuccess: onDeleted })}
+        onClick={() => remove.mutate()}
       >
         {remove.isPending ? 'Deleting…' : `Delete ${team.name}`}
       </Button>

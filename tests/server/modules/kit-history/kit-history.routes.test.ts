@@ -47,6 +47,16 @@ describe('kit history routes', () => {
     return { ...team, profile, preset, res, kitId: res.headers['x-seamwright-kit-id'] as string };
   }
 
+  it('uses no printer when the body says null, even when the preset names one', async () => {
+    const { base, viewer, preset } = await recordedKit();
+    const res = await viewer.agent
+      .post(`${base}/kits`)
+      .send({ request: { ...helmetSettings, face }, presetId: preset.id, printerProfileId: null });
+    expect(res.status).toBe(201);
+    const entry = await viewer.agent.get(`${base}/kits/${res.headers['x-seamwright-kit-id']}`);
+    expect(entry.body).toMatchObject({ presetName: 'Helmet crown seam', printerProfileId: null, calibration: null });
+  });
+
   it('records who, when, the request, preset version and the printer’s calibration, and returns the zip', async () => {
     const { res, kitId, base, viewer, owner } = await recordedKit();
     expect(res.headers['content-type']).toBe('application/zip');

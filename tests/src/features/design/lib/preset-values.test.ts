@@ -8,6 +8,7 @@ import {
   kitRequestOf,
   presetRequest,
   presetText,
+  savedPresetText,
   type TeamChoices,
   valuesFromPreset,
   withProfileCalibration,
@@ -35,10 +36,28 @@ const greyPla = {
 } as const;
 const team: TeamChoices = { printerProfiles: [benchFdm], teamMaterials: [greyPla] };
 
+const extrasArb = fc.record({
+  offset: fc.integer({ min: -50, max: 50 }).map((n) => n / 1000),
+  source: fc.option(fc.constantFrom('fit test of the corner printer', 'entered by hand'), { nil: undefined }),
+  tuning: fc.option(
+    fc.record({
+      name: fc.constantFrom('Chalk-white PLA', 'Night-blue PETG'),
+      clearanceAdjustment: fc.integer({ min: -50, max: 50 }).map((n) => n / 1000),
+    }),
+    { nil: undefined },
+  ),
+});
+
 describe('valuesFromPreset', () => {
   it('puts every saved setting back, so the form sends the preset’s settings unchanged', () => {
     fc.assert(
-      fc.property(fc.oneof(keyRequestArb, dovetailRequestArb), (sent: KitRequest) => {
+      fc.property(fc.oneof(keyRequestArb, dovetailRequestArb), extrasArb, (base: KitRequest, extras) => {
+        // What only presets carry: whose correction it was, and a team material's tuning.
+        const sent = {
+          ...base,
+          ...(extras.source ? { calibrationOffset: extras.offset, calibrationSource: extras.source } : {}),
+          ...(extras.tuning ? { materialTuning: extras.tuning } : {}),
+        };
         const parsed = kitRequestSchema.safeParse(sent);
         fc.pre(parsed.success);
         if (!parsed.success) return;
@@ -46,6 +65,8 @@ describe('valuesFromPreset', () => {
         const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
         const again = kitRequestSchema.parse(toKitRequest(values));
         expect(withoutFace(again)).toEqual(settings);
+        // …so the screen calls the design unchanged.
+        expect(presetText(values, null)).toBe(savedPresetText({ settings, printerProfileId: null }));
       }),
       { numRuns: 200 },
     );
@@ -153,5 +174,38 @@ describe('team materials', () => {
     // 0.16 mm published snug default on FDM (REFERENCES §7.2) + 0.03 team material − 0.03 printer calibration.
     expect(preview.materialTuning?.clearanceAdjustment).toBe(0.03);
     expect(preview.calibrationOffset).toBe(-0.03);
+  });
+});
+
+describe('savedPresetText', () => {
+  it('shows a loaded preset as changed when the form could not keep its printer profile', () => {
+    const settings = withoutFace(kitRequestSchema.parse(toKitRequest(DEFAULT_DESIGN)));
+    const saved = { settings, printerProfileId: benchFdm.id };
+    expect(presetText(valuesFromPreset(DEFAULT_DESIGN, saved, team), team)).toBe(savedPresetText(saved));
+    expect(presetText(valuesFromPreset(DEFAULT_DESIGN, saved, null), null)).not.toBe(savedPresetText(saved));
+  });
+
+  it('shows it as changed when its team material’s adjustment changed since it was saved', () => {
+    const settings = withoutFace(
+      kitRequestSchema.parse({
+        ...toKitRequest(DEFAULT_DESIGN),
+        materialTuning: { name: greyPla.name, clearanceAdjustment: 0.01 },
+      }),
+    );
+    const saved = { settings, printerProfileId: null };
+    expect(presetText(valuesFromPreset(DEFAULT_DESIGN, saved, team), team)).not.toBe(savedPresetText(saved));
+  });
+
+  it('drops whose correction it was once the correction is typed anew', () => {
+    const settings = withoutFace(
+      kitRequestSchema.parse({
+        ...toKitRequest(DEFAULT_DESIGN),
+        calibrationOffset: -0.02,
+        calibrationSource: 'fit test',
+      }),
+    );
+    const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
+    expect(toKitRequest(values).calibrationSource).toBe('fit test');
+    expect(toKitRequest({ ...values, calibrationOffset: -0.04 }).calibrationSource).toBeUndefined();
   });
 });

@@ -22,9 +22,9 @@ describe('materialChanges', () => {
     expect(materialChanges(grey, edit({ name: '  Grey matte PLA ' }))).toEqual({});
   });
 
-  it('sends the three clearance adjustments together when one of them changed', () => {
+  it('sends only the fit classes whose adjustment changed, so another edit of the others is kept', () => {
     expect(materialChanges(grey, edit({ clearanceAdjustments: { press: 0, snug: 0.05, slide: 0 } }))).toEqual({
-      clearanceAdjustments: { press: 0, snug: 0.05, slide: 0 },
+      clearanceAdjustments: { snug: 0.05 },
     });
   });
 
