@@ -184,4 +184,26 @@ describe('design screen with a team library', () => {
     await expect.poll(() => p.getByLabel('Wall around each pocket').inputValue()).toBe('3');
     await p.close();
   });
+
+  it('says so when the printer’s calibration changed after the page loaded, and follows it', async () => {
+    await page.getByLabel('Printer profile').selectOption({ label: 'Corner FDM' });
+    await upToDate(page);
+    const before = await page.getByTestId('clearance').textContent();
+    await json(
+      printerProfileSchema,
+      await api.patch(`/api/teams/${teamId}/printer-profiles/${profileId}`, {
+        data: {
+          calibration: [
+            { material: 'PLA', fit: 'snug', offsetMm: -0.08, measuredOn: '2026-11-28', source: 'fit test' },
+          ],
+        },
+      }),
+    );
+    await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Download the kit (.zip)' }).click(),
+    ]);
+    await expect.poll(() => page.getByText('changed since this page loaded').count(), { timeout: 15_000 }).toBe(1);
+    await expect.poll(() => page.getByTestId('clearance').textContent(), { timeout: 15_000 }).not.toBe(before);
+  });
 });

@@ -30,6 +30,9 @@ export function kitHistoryRoutes(ctx: AppContext): Router {
       .status(201)
       .location(`/api/teams/${teamId}/kits/${kit.id}`)
       .set('X-Seamwright-Kit-Id', kit.id)
+      // The clearance the kit was built with (mm per side): the design screen compares it with its preview,
+      // which may have used a printer calibration or team material that changed since the page loaded.
+      .set('X-Seamwright-Clearance', String(kit.clearancePerSide))
       .type('application/zip')
       .attachment(kit.fileName)
       .send(kit.zip);

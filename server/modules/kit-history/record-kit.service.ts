@@ -88,7 +88,7 @@ async function teamMaterialOf(db: Executor, teamId: string, id: string | null) {
  * and the zip itself. Any member may (viewers download kits too).
  *
  * @param db - the database, or the seed's transaction
- * @returns the history id, the download name and the zip
+ * @returns the history id, the download name, the zip and the clearance per side it was built with
  */
 export async function recordKit(db: Executor, user: SessionUser, teamId: string, input: ParsedRecordKitInput) {
   await requireTeamRole(db, teamId, user, 'viewer');
@@ -127,5 +127,5 @@ export async function recordKit(db: Executor, user: SessionUser, teamId: string,
     engineVersion: ENGINE_VERSION,
     zip,
   });
-  return { id, fileName, zip };
+  return { id, fileName, zip, clearancePerSide: kit.manifest.clearancePerSide };
 }

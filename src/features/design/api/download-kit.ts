@@ -7,6 +7,8 @@ import { useCurrentTeam } from '../../../lib/session';
 export interface DownloadedFile {
   readonly blob: Blob;
   readonly name: string;
+  /** The clearance per side the server built a recorded kit with (mm); absent for the public route. */
+  readonly clearancePerSide?: number;
 }
 
 /** What a recorded download names besides its request: the preset (and version), printer and team material. */
@@ -54,7 +56,12 @@ export async function downloadKit({
   }
   const disposition = response.headers.get('Content-Disposition') ?? '';
   const name = /filename="?([^";]+)"?/.exec(disposition)?.[1] ?? 'seamwright-kit.zip';
-  return { blob: await response.blob(), name };
+  const clearance = Number(response.headers.get('X-Seamwright-Clearance') ?? Number.NaN);
+  return {
+    blob: await response.blob(),
+    name,
+    ...(Number.isFinite(clearance) ? { clearancePerSide: clearance } : {}),
+  };
 }
 
 /** The zip download as a mutation: pending while the server builds, the error in the server's words. */

@@ -1,4 +1,5 @@
 import { useState, memo } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import type { KitRequest } from '../../../../shared/schemas/kit-request';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
@@ -34,6 +35,8 @@ export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, 
   const zip = useDownloadKit();
   const { team } = useCurrentTeam();
   const [partError, setPartError] = useState<string | null>(null);
+  const [staleNote, setStaleNote] = useState<string | null>(null);
+  const queryClient = useQueryClient();
   const ready = Boolean(request && kit && !blocked);
   const binary = kit?.manifest.request.format !== 'ascii';
   return (
@@ -88,9 +91,30 @@ export const KitDownloads = memo(function KitDownloads({ request, kit, blocked, 
           </ul>
           {partError && <Notice tone="error">{partError}</Notice>}
           {zip.isError && <Notice tone="error">{zip.error.message}</Notice>}
+          {staleNote && <Notice tone="warning">{staleNote}</Notice>}
           <Button
             onClick={() =>
-              request && zip.mutate({ request, origin }, { onSuccess: (file) => saveFile(file.blob, file.name) })
+              request &&
+              zip.mutate(
+                { request, origin },
+                {
+                  onSuccess: (file) => {
+                    saveFile(file.blob, file.name);
+                    const shown = kit?.manifest.clearancePerSide;
+                    const built = file.clearancePerSide;
+                    // The server reads the printer's calibration and the team material afresh; the preview
+                    // used what this page loaded. If they changed meanwhile, say so and load them again.
+                    if (built === undefined || shown === undefined || Math.abs(built - shown) < 1e-9) {
+                      setStaleNote(null);
+                      return;
+                    }
+                    setStaleNote(
+                      `The kit was built with ${built} mm per side, not the ${shown} mm shown here: your team’s printer calibration or material changed since this page loaded. The preview now follows the current numbers.`,
+                    );
+                    if (team) void queryClient.invalidateQueries({ queryKey: ['teams', team.id] });
+                  },
+                },
+              )
             }
             disabled={zip.isPending}
             className="w-full py-3 text-lead sm:w-auto"
