@@ -118,4 +118,19 @@ describe('units', () => {
     await poll(() => page.getByRole('radio', { name: 'Inches' }).isChecked()).toBe(true);
     await poll(() => faceWidth(page).inputValue()).toBe('3.1496');
   });
+
+  it('carries a choice an earlier version kept on this browser into a new account', async () => {
+    const { context, page } = await freshPage();
+    const other = `units-old-${randomUUID().slice(0, 8)}@quillmoss.example`;
+    await context.request.post('/api/auth/sign-up', {
+      data: { email: other, password: PASSWORD, name: 'Old Browser' },
+    });
+    const me = (await (await context.request.get('/api/me')).json()) as { user: { id: string } };
+    await page.goto('/');
+    await page.evaluate((id) => window.localStorage.setItem(`seamwright.units.${id}`, 'in'), me.user.id);
+    await page.goto('/design');
+    await poll(() => page.getByRole('radio', { name: 'Inches' }).isChecked()).toBe(true);
+    await poll(() => accountUnits(context)).toBe('in');
+    expect(await page.evaluate((id) => window.localStorage.getItem(`seamwright.units.${id}`), me.user.id)).toBeNull();
+  });
 });

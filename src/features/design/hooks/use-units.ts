@@ -1,4 +1,4 @@
-import { useCallback, useSyncExternalStore } from 'react';
+import { useCallback, useEffect, useSyncExternalStore } from 'react';
 import { useMe } from '../../../lib/session';
 import { useUnitsPreference } from '../../../lib/units-preference';
 import type { LengthUnit } from '../lib/units';
@@ -24,6 +24,18 @@ export function useUnits(): { unit: LengthUnit; setUnit: (unit: LengthUnit) => v
   const account = useUnitsPreference(signedIn);
   const guest = useSyncExternalStore(subscribe, readGuest, () => null);
   const { save } = account;
+  // Earlier versions kept a signed-in person's choice on the browser only (seamwright.units.<userId>): carry
+  // it into the account once, so nobody who chose inches finds millimetres after the update.
+  const userId = me?.user.id ?? null;
+  const loaded = account.units !== undefined;
+  useEffect(() => {
+    if (!userId || !loaded) return;
+    const key = `seamwright.units.${userId}`;
+    const old = window.localStorage.getItem(key);
+    if (old === null) return;
+    window.localStorage.removeItem(key);
+    if (old === 'in' && account.units === 'mm') save('in');
+  }, [userId, loaded, account.units, save]);
   const setUnit = useCallback(
     (unit: LengthUnit) => {
       if (signedIn) return save(unit);
