@@ -138,6 +138,22 @@ describe('design screen', () => {
   });
 });
 
+describe('ready-made setups', () => {
+  it('fills the whole form, face included, without an account', async () => {
+    const p = await context.newPage();
+    await p.goto('/design');
+    await upToDate(p);
+    await p.getByLabel('Start from a ready-made setup').selectOption({ label: 'Removable display base' });
+    await p.getByRole('button', { name: 'Use this setup' }).click();
+    await expect.poll(() => p.getByLabel('Face width (x)').inputValue()).toBe('120');
+    expect(await p.getByLabel('Material', { exact: true }).inputValue()).toBe('PETG');
+    expect(await p.getByRole('radio', { name: /Sliding dovetail/ }).isChecked()).toBe(true);
+    await upToDate(p);
+    await expect.poll(() => p.getByTestId('kit-files').textContent()).toContain('rail-A.stl');
+    await p.close();
+  }, 60_000);
+});
+
 describe('dovetail preview', () => {
   // The preview's update time is measured by `npm run bench` (tests/bench/preview-bench.ts), not here.
   it('draws a dovetail kit when the joint changes', async () => {

@@ -6,12 +6,13 @@ import { useUnits } from '../hooks/use-units';
 import { useDesignPresets } from '../hooks/use-design-presets';
 import type { DesignLibrary } from '../lib/design-library';
 import { DEFAULT_DESIGN, designResolver, type DesignValues } from '../lib/design-values';
-import { chosenProfile, chosenTeamMaterial, kitRequestOf, presetText } from '../lib/preset-values';
+import { chosenProfile, chosenTeamMaterial, kitRequestOf, presetText, valuesFromStarter } from '../lib/preset-values';
 import { DesignForm } from './design-form';
 import { FaceDrawing } from './face-drawing';
 import { FitExplanation } from './fit-explanation';
 import { KitDownloads } from './kit-downloads';
 import { PresetBar } from './preset-bar';
+import { StarterPicker } from './starter-picker';
 import { PreviewPanel } from './preview/preview-panel';
 import { UnitSwitch } from './unit-switch';
 import { WarningsAndCautions } from './warnings-and-cautions';
@@ -66,6 +67,13 @@ export function DesignScreen({ library }: { library: DesignLibrary | null }) {
       </header>
       <div className="grid gap-8 lg:grid-cols-[minmax(20rem,26rem)_1fr]">
         <div className="space-y-6 rounded-card border border-paper-deep bg-white/50 p-4 sm:p-5">
+          <StarterPicker
+            onPick={(setup) => {
+              form.reset(valuesFromStarter(form.getValues(), setup, library));
+              // The design no longer comes from a team preset.
+              presets.forget();
+            }}
+          />
           <PresetBar library={library} presets={presets} currentText={currentText} invalid={!request} />
           <DesignForm form={form} unit={unit} team={library} />
         </div>

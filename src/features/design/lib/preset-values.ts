@@ -7,6 +7,7 @@ import type { PrinterProfile } from '../../../../shared/schemas/printer-profile'
 import { profileCalibration } from '../../../../shared/library/profile-calibration';
 import { teamMaterialTuning } from '../../../../shared/library/team-material-tuning';
 import { DEFAULT_DESIGN, toKitRequest, type DesignValues } from './design-values';
+import type { StarterSetup } from './starter-setups';
 
 /** The current team's printer profiles and materials, as far as the form needs them. */
 export interface TeamChoices {
@@ -76,6 +77,21 @@ export function valuesFromPreset(
     key: s.joint === 'key' ? { ...s.key } : current.key,
     dovetail: s.joint === 'dovetail' ? { ...s.dovetail } : current.dovetail,
   };
+}
+
+/**
+ * The form's values with a ready-made setup in place, its face included. The printer profile chosen stays if
+ * it prints the setup's process; nothing of the team's is taken from the setup.
+ */
+export function valuesFromStarter(
+  current: DesignValues,
+  starter: StarterSetup,
+  team: TeamChoices | null,
+): DesignValues {
+  const settings = withoutFace(kitRequestSchema.parse({ ...starter.settings, face: starter.face }));
+  const values = valuesFromPreset(current, { settings, printerProfileId: null }, team);
+  const profile = chosenProfile({ ...values, printerProfileId: current.printerProfileId }, team);
+  return { ...values, printerProfileId: profile?.id ?? '', face: { ...current.face, ...starter.face } };
 }
 
 /** A kit request's settings as a preset keeps them: everything but the face. */

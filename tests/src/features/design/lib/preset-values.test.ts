@@ -9,6 +9,7 @@ import {
   presetRequest,
   presetText,
   savedPresetText,
+  valuesFromStarter,
   type TeamChoices,
   valuesFromPreset,
   withProfileCalibration,
@@ -16,6 +17,7 @@ import {
 import { applyCalibration } from '../../../../../server/modules/kit-history/kit-calibration';
 import { applyTeamMaterial } from '../../../../../server/modules/kit-history/kit-material';
 import type { TeamMaterial } from '../../../../../shared/schemas/material';
+import { STARTER_SETUPS } from '../../../../../src/features/design/lib/starter-setups';
 import { dovetailRequestArb, keyRequestArb } from '../../../../shared/kit/kit-request-arbitrary';
 
 const benchFdm = {
@@ -207,5 +209,18 @@ describe('savedPresetText', () => {
     const values = valuesFromPreset(DEFAULT_DESIGN, { settings, printerProfileId: null }, null);
     expect(toKitRequest(values).calibrationSource).toBe('fit test');
     expect(toKitRequest({ ...values, calibrationOffset: -0.04 }).calibrationSource).toBeUndefined();
+  });
+});
+
+describe('valuesFromStarter', () => {
+  it('takes the setup’s face and settings and keeps a printer of the same process', () => {
+    const figure = STARTER_SETUPS.find((s) => s.id === 'figure-seam')!;
+    const values = valuesFromStarter({ ...DEFAULT_DESIGN, printerProfileId: benchFdm.id }, figure, team);
+    expect(values.face).toMatchObject({ shape: 'rect', width: 40, height: 30 });
+    expect(values.printerProfileId).toBe(benchFdm.id);
+    const resin = STARTER_SETUPS.find((s) => s.id === 'resin-detail')!;
+    expect(valuesFromStarter({ ...DEFAULT_DESIGN, printerProfileId: benchFdm.id }, resin, team).printerProfileId).toBe(
+      '',
+    );
   });
 });
