@@ -90,3 +90,18 @@ export function saveFile({ blob, fileName }: Pick<ApiFile, 'blob' | 'fileName'>)
   // Revoked on the next tick: the click has started the download by then.
   setTimeout(() => URL.revokeObjectURL(url), 0);
 }
+
+/**
+ * A list query as a URL query string, leaving out what is not set (undefined or empty), so a list's filters
+ * can be passed as they are.
+ *
+ * @example
+ * toQueryString({ q: 'helmet', tag: '', page: 2 }); // "q=helmet&page=2"
+ */
+export function toQueryString(query: object): string {
+  return new URLSearchParams(
+    Object.entries(query)
+      .filter(([, v]) => v !== undefined && v !== '')
+      .map(([k, v]) => [k, String(v)]),
+  ).toString();
+}

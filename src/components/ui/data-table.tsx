@@ -27,12 +27,10 @@ export interface ListView {
 interface Props<T extends RowData> {
   caption: string;
   columns: DataTableColumn<T>[];
-  rows: T[] | undefined;
-  total: number;
+  /** The list query as TanStack Query answers it: a page of rows with the total, while loading, or its error. */
+  list: { data?: { items: T[]; total: number }; isPending: boolean; error: Error | null };
   view: ListView;
   onView: (view: ListView) => void;
-  isLoading: boolean;
-  error: Error | null;
   empty: ReactNode;
   rowKey: (row: T) => string;
 }
@@ -43,18 +41,10 @@ const EMPTY: never[] = [];
  * A table whose sorting and paging happen on the server: header clicks and the pager only change `view`,
  * which the caller puts in its query key. Shows loading, error and empty states in words.
  */
-export function DataTable<T extends RowData>({
-  caption,
-  columns,
-  rows,
-  total,
-  view,
-  onView,
-  isLoading,
-  error,
-  empty,
-  rowKey,
-}: Props<T>) {
+export function DataTable<T extends RowData>({ caption, columns, list, view, onView, empty, rowKey }: Props<T>) {
+  const { data, isPending: isLoading, error } = list;
+  const rows = data?.items;
+  const total = data?.total ?? 0;
   const sorting: SortingState = [{ id: view.sort, desc: view.order === 'desc' }];
   const pagination = { pageIndex: view.page - 1, pageSize: view.pageSize };
   const table = useTable({

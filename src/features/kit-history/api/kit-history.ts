@@ -5,7 +5,7 @@ import {
   type KitHistoryQuery,
   type RecordKitInput,
 } from '../../../../shared/schemas/kit-history';
-import { apiFetch, apiFile, saveFile } from '../../../lib/api-client';
+import { apiFetch, apiFile, saveFile, toQueryString } from '../../../lib/api-client';
 
 /** Query keys of the kit history feature. */
 export const kitKeys = {
@@ -13,18 +13,11 @@ export const kitKeys = {
   list: (teamId: string, query: KitHistoryQuery) => ['teams', teamId, 'kits', query] as const,
 };
 
-const search = (q: Record<string, unknown>) =>
-  new URLSearchParams(
-    Object.entries(q)
-      .filter(([, v]) => v !== undefined && v !== '')
-      .map(([k, v]) => [k, String(v)]),
-  ).toString();
-
 /** GET /api/teams/:teamId/kits: the kits the team downloaded. */
 export const kitHistoryQueryOptions = (teamId: string, query: KitHistoryQuery) =>
   queryOptions({
     queryKey: kitKeys.list(teamId, query),
-    queryFn: async () => kitHistoryPageSchema.parse(await apiFetch(`/teams/${teamId}/kits?${search(query)}`)),
+    queryFn: async () => kitHistoryPageSchema.parse(await apiFetch(`/teams/${teamId}/kits?${toQueryString(query)}`)),
     placeholderData: keepPreviousData,
   });
 export const useKitHistory = (teamId: string, query: KitHistoryQuery) =>

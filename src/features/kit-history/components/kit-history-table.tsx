@@ -156,12 +156,9 @@ export function KitHistoryTable({ teamId, printers }: { teamId: string; printers
       <DataTable
         caption="Kit history"
         columns={columns}
-        rows={data?.items}
-        total={data?.total ?? 0}
+        list={{ data, isPending, error }}
         view={view}
         onView={setView}
-        isLoading={isPending}
-        error={error}
         rowKey={(k) => k.id}
         empty="No kits recorded yet. Kits you download while signed in appear here."
       />

@@ -7,7 +7,7 @@ import {
   type TeamMaterialListQuery,
   type TeamMaterialPage,
 } from '../../../../shared/schemas/material';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch, toQueryString } from '../../../lib/api-client';
 
 /** Query keys of the materials feature. */
 export const materialKeys = {
@@ -25,18 +25,12 @@ export const catalogueQueryOptions = (teamId: string) =>
   });
 export const useCatalogue = (teamId: string) => useQuery(catalogueQueryOptions(teamId));
 
-const search = (q: Record<string, unknown>) =>
-  new URLSearchParams(
-    Object.entries(q)
-      .filter(([, v]) => v !== undefined && v !== '')
-      .map(([k, v]) => [k, String(v)]),
-  ).toString();
-
 /** GET /api/teams/:teamId/materials: the team's own materials. */
 export const teamMaterialsQueryOptions = (teamId: string, query: TeamMaterialListQuery) =>
   queryOptions({
     queryKey: materialKeys.list(teamId, query),
-    queryFn: async () => teamMaterialPageSchema.parse(await apiFetch(`/teams/${teamId}/materials?${search(query)}`)),
+    queryFn: async () =>
+      teamMaterialPageSchema.parse(await apiFetch(`/teams/${teamId}/materials?${toQueryString(query)}`)),
     placeholderData: keepPreviousData,
   });
 export const useTeamMaterials = (teamId: string, query: TeamMaterialListQuery) =>

@@ -145,12 +145,9 @@ export function TeamMaterials({
       <DataTable
         caption="Team materials"
         columns={columns}
-        rows={data?.items}
-        total={data?.total ?? 0}
+        list={{ data, isPending, error }}
         view={view}
         onView={setView}
-        isLoading={isPending}
-        error={error}
         rowKey={(m) => m.id}
         empty={q ? 'No material matches.' : 'No team materials yet.'}
       />

@@ -7,10 +7,3 @@ export const presetKeys = {
   detail: (teamId: string, id: string) => ['teams', teamId, 'presets', 'detail', id] as const,
   versions: (teamId: string, id: string) => ['teams', teamId, 'presets', 'detail', id, 'versions'] as const,
 };
-
-/** A list query as a URL query string, leaving out what is not set. */
-export function toSearch(query: Record<string, string | number | undefined>): string {
-  const params = new URLSearchParams();
-  for (const [k, v] of Object.entries(query)) if (v !== undefined && v !== '') params.set(k, String(v));
-  return params.toString();
-}

@@ -184,12 +184,9 @@ export function PresetsTable({ teamId, printers, canEdit, canDelete }: Props) {
       <DataTable
         caption="Presets"
         columns={columns}
-        rows={data?.items}
-        total={data?.total ?? 0}
+        list={{ data, isPending, error }}
         view={view}
         onView={setView}
-        isLoading={isPending}
-        error={error}
         rowKey={(p) => p.id}
         empty={
           filters.q || filters.tag || filters.joint || filters.material || filters.printer

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { printerProfilePageSchema, type PrinterProfileListQuery } from '../../../../shared/schemas/printer-profile';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch, toQueryString } from '../../../lib/api-client';
 
 /** Query keys of the printer profiles feature. */
 export const printerKeys = {
@@ -8,16 +8,9 @@ export const printerKeys = {
   list: (teamId: string, query: PrinterProfileListQuery) => ['teams', teamId, 'printer-profiles', query] as const,
 };
 
-const search = (q: Record<string, unknown>) =>
-  new URLSearchParams(
-    Object.entries(q)
-      .filter(([, v]) => v !== undefined && v !== '')
-      .map(([k, v]) => [k, String(v)]),
-  ).toString();
-
 /** GET /api/teams/:teamId/printer-profiles. */
 export async function getPrinterProfiles(teamId: string, query: PrinterProfileListQuery) {
-  return printerProfilePageSchema.parse(await apiFetch(`/teams/${teamId}/printer-profiles?${search(query)}`));
+  return printerProfilePageSchema.parse(await apiFetch(`/teams/${teamId}/printer-profiles?${toQueryString(query)}`));
 }
 
 export const printerProfilesQueryOptions = (teamId: string, query: PrinterProfileListQuery) =>

@@ -134,12 +134,9 @@ export function PrinterProfilesTable({ teamId, canEdit, canDelete, onEdit }: Pro
       <DataTable
         caption="Printer profiles"
         columns={columns}
-        rows={data?.items}
-        total={data?.total ?? 0}
+        list={{ data, isPending, error }}
         view={view}
         onView={setView}
-        isLoading={isPending}
-        error={error}
         rowKey={(p) => p.id}
         empty={
           q || process
