@@ -1,20 +1,14 @@
 // Finds, installs, initialises, starts and stops the project's own PostgreSQL cluster.
 // It listens on 127.0.0.1 only, at a non-default port, with its unix socket inside the data folder.
-import { existsSync, mkdirSync, readFileSync, readdirSync, rmSync, chownSync } from 'node:fs';
-import { createHash } from 'node:crypto';
+// Where its files live (and who owns them) is cluster-location.mjs; how its programs run is pg-run.mjs.
+import { existsSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 
-import { root, dataDir } from './paths.mjs';
 import { dbPort } from './db-settings.mjs';
+import { location, prepareFolder } from './cluster-location.mjs';
+import { isRoot, run } from './pg-run.mjs';
 import { fail, say } from './log.mjs';
-
-const isRoot = process.getuid?.() === 0;
-
-function run(cmd, args, { asPostgres = false, quiet = true } = {}) {
-  const [file, argv] = asPostgres && isRoot ? ['runuser', ['-u', 'postgres', '--', cmd, ...args]] : [cmd, args];
-  return spawnSync(file, argv, { encoding: 'utf8', stdio: quiet ? 'pipe' : 'inherit' });
-}
 
 function findBinDir() {
   const debianRoot = '/usr/lib/postgresql';
@@ -52,43 +46,6 @@ export function ensureServerBinaries() {
   }
   if (!bin) fail('PostgreSQL was installed but initdb is still not found.');
   return bin;
-}
-
-// As root, the cluster runs as the `postgres` system user, which must be able to reach the folder.
-// When the checkout sits somewhere it cannot enter (a private home folder), use a folder under /var/tmp.
-function resolveLocation() {
-  let base = dataDir;
-  if (isRoot) {
-    mkdirSync(dataDir, { recursive: true });
-    const reach = run('sh', ['-c', 'cd "$1"', 'sh', dataDir], { asPostgres: true });
-    if (reach.status !== 0) {
-      const tag = createHash('sha256').update(root).digest('hex').slice(0, 12);
-      base = path.join('/var/tmp', `seamwright-${tag}`);
-      say(`the postgres user cannot enter ${dataDir}; keeping the cluster in ${base}`);
-    }
-  }
-  return {
-    clusterDir: path.join(base, 'pg'),
-    socketDir: path.join(base, 'pg-run'),
-    logFile: path.join(base, 'pg-run', 'postgres.log'),
-  };
-}
-
-export const location = resolveLocation();
-
-function prepareFolder(dir) {
-  mkdirSync(dir, { recursive: true, mode: 0o700 });
-  if (isRoot) {
-    const { uid, gid } = postgresIds();
-    chownSync(dir, uid, gid);
-  }
-}
-
-function postgresIds() {
-  const r = spawnSync('id', ['-u', 'postgres'], { encoding: 'utf8' });
-  const g = spawnSync('id', ['-g', 'postgres'], { encoding: 'utf8' });
-  if (r.status !== 0) fail('running as root needs the "postgres" system user (it comes with the postgresql package).');
-  return { uid: Number(r.stdout), gid: Number(g.stdout) };
 }
 
 export function isReady(bin) {
@@ -174,7 +131,8 @@ export function stopCluster(bin) {
   say('PostgreSQL stopped.');
 }
 
-function psql(bin, database, sql) {
+/** Runs one SQL string (several statements run as one transaction) in `database`; returns the result. */
+export function psql(bin, database, sql) {
   return run(path.join(bin, 'psql'), [
     '-h',
     '127.0.0.1',
@@ -184,17 +142,25 @@ function psql(bin, database, sql) {
     'postgres',
     '-d',
     database,
+    '-v',
+    'ON_ERROR_STOP=1',
     '-tAc',
     sql,
   ]);
+}
+
+/** Whether the cluster has a database of this name. */
+export function databaseExists(bin, name) {
+  const r = psql(bin, 'postgres', `SELECT 1 FROM pg_database WHERE datname = '${name}'`);
+  if (r.status !== 0) fail(`could not list the databases:\n${r.stderr}`);
+  return r.stdout.trim() === '1';
 }
 
 /** Creates the database when it does not exist yet; with `fresh`, drops it first. */
 export function ensureDatabase(bin, name, { fresh = false } = {}) {
   if (!/^[a-z_][a-z0-9_]*$/.test(name)) fail(`bad database name ${name}`);
   if (fresh) psql(bin, 'postgres', `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
-  const exists = psql(bin, 'postgres', `SELECT 1 FROM pg_database WHERE datname = '${name}'`);
-  if (exists.stdout.trim() === '1') return;
+  if (databaseExists(bin, name)) return;
   const r = psql(bin, 'postgres', `CREATE DATABASE ${name}`);
   if (r.status !== 0) fail(`could not create database ${name}:\n${r.stderr}`);
 }
