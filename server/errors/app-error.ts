@@ -9,6 +9,8 @@ export const errorStatus = {
   NOT_FOUND: 404,
   CONFLICT: 409,
   PAYLOAD_TOO_LARGE: 413,
+  // A body in a charset or content encoding the server does not read (JSON is read as UTF-8 only).
+  UNSUPPORTED_MEDIA_TYPE: 415,
   GEOMETRY_IMPOSSIBLE: 422,
   // Well-formed input that cannot be used as it stands, e.g. a fit test whose answers contradict each other.
   UNPROCESSABLE: 422,

@@ -1,19 +1,11 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { GeometryError } from '../../shared/geometry/geometry-error';
-import { AppError } from '../errors/app-error';
+import { AppError, type ErrorCode } from '../errors/app-error';
+import { fromHttpError } from '../errors/from-http-error';
+import { fromPostgres } from '../errors/from-postgres';
+import { fromUpload } from '../errors/from-upload';
 import { fromZod } from '../errors/from-zod';
-
-// body-parser marks its own failures with a `type`; map them to the closed list of codes.
-function fromBodyParser(err: { type?: string; limit?: number }): AppError | null {
-  if (err.type === 'entity.too.large') {
-    return new AppError('PAYLOAD_TOO_LARGE', `The request body is larger than the ${err.limit} bytes allowed.`);
-  }
-  if (err.type === 'entity.parse.failed') {
-    return new AppError('BAD_REQUEST', 'The request body is not valid JSON.');
-  }
-  return null;
-}
 
 function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
@@ -21,18 +13,26 @@ function toAppError(err: unknown): AppError {
   if (err instanceof GeometryError)
     return new AppError('GEOMETRY_IMPOSSIBLE', err.message, [{ path: err.code, message: err.message }]);
   if (typeof err === 'object' && err !== null) {
-    const parsed = fromBodyParser(err as { type?: string; limit?: number });
-    if (parsed) return parsed;
+    const mapped = fromHttpError(err) ?? fromUpload(err) ?? fromPostgres(err);
+    if (mapped) return mapped;
   }
   return new AppError('INTERNAL', 'Something went wrong on our side. Please try again.');
 }
 
+// When to try again, in seconds, for answers that mean "not now" rather than "never".
+const RETRY_AFTER: Partial<Record<ErrorCode, string>> = { RATE_LIMITED: '60', SERVICE_UNAVAILABLE: '5' };
+
 /** The one error middleware: every failure leaves in the shape {"error":{"code","message","issues"?}}. */
-export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   const appError = toAppError(err);
-  // A 500 is logged with its stack but never sends it to the client.
-  if (appError.status >= 500) req.log?.error({ err }, 'request failed');
-  if (appError.code === 'RATE_LIMITED' && !res.getHeader('Retry-After')) res.setHeader('Retry-After', '60');
+  // A 500 is logged with its stack but never sends it to the client; a database outage is logged once per
+  // request as a warning, without a stack, as it says nothing about the code.
+  if (appError.code === 'SERVICE_UNAVAILABLE') req.log?.warn({ reason: appError.message }, 'request refused for now');
+  else if (appError.status >= 500) req.log?.error({ err }, 'request failed');
+  // A reply already under way (a zip being streamed) cannot change its status: Express cuts the connection.
+  if (res.headersSent) return next(err);
+  const retryAfter = RETRY_AFTER[appError.code];
+  if (retryAfter && !res.getHeader('Retry-After')) res.setHeader('Retry-After', retryAfter);
   res.status(appError.status).json({
     error: {
       ...appError.extra,
