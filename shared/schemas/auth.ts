@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { emailSchema } from './email';
+import { plainText } from './plain-text';
 
 /** Shortest password accepted (common practice: NIST SP 800-63B §5.1.1.2 asks for at least 8; we ask 10). */
 export const MIN_PASSWORD_LENGTH = 10;
@@ -16,12 +17,15 @@ export const passwordSchema = z
   .min(MIN_PASSWORD_LENGTH, { error: () => `Use at least ${MIN_PASSWORD_LENGTH} characters.` })
   .max(MAX_PASSWORD_LENGTH, { error: () => `Use at most ${MAX_PASSWORD_LENGTH} characters.` });
 
-/** A display name: trimmed, 1 to 100 characters, stored and shown exactly as written. */
-export const displayNameSchema = z
-  .string({ error: () => 'Enter your name.' })
-  .trim()
-  .min(1, { error: () => 'Enter your name.' })
-  .max(100, { error: () => 'Use at most 100 characters.' });
+/** A display name: trimmed, 1 to 100 characters without control characters, stored and shown as written. */
+export const displayNameSchema = plainText(
+  z
+    .string({ error: () => 'Enter your name.' })
+    .trim()
+    .min(1, { error: () => 'Enter your name.' })
+    .max(100, { error: () => 'Use at most 100 characters.' }),
+  'name',
+);
 
 /**
  * `POST /api/auth/sign-up` body.

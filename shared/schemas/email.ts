@@ -12,8 +12,9 @@ const INVISIBLE = /\p{Cf}/gu;
 // Letters, digits and hyphens per label; non-ASCII domains must arrive in their xn-- form so
 // look-alike letters from other scripts cannot pass as a familiar domain.
 const DOMAIN = /^(?=.{1,253}$)(?:[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?\.)+[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?$/;
-// Anything visible except @, spaces, angle brackets, quotes and control characters.
-const LOCAL = /^[^\s@<>"()[\]\\,;:\p{Cc}]+$/u;
+// Anything visible except @, spaces, angle brackets, quotes, control characters and lone surrogates
+// (half a character, which no mail server can carry).
+const LOCAL = /^[^\s@<>"()[\]\\,;:\p{Cc}\p{Cs}]+$/u;
 
 /**
  * Normalises an e-mail address the same way on both sides: NFKC (full-width and other compatibility

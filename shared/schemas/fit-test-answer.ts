@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 /**
  * What a key (or rail) did in one graded pocket of a printed coupon, from tightest to loosest:
@@ -12,7 +13,7 @@ export type FitTestOutcome = z.infer<typeof fitTestOutcomeSchema>;
 
 /** One pocket's answer: its mark, its clearance per side (mm, from the coupon's manifest) and the outcome. */
 export const fitTestAnswerSchema = z.object({
-  mark: z.string().min(1).max(8),
+  mark: plainText(z.string().min(1).max(8), 'each pocket mark'),
   clearancePerSide: z.number().min(0).max(1),
   outcome: fitTestOutcomeSchema,
 });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { fitClassSchema, materialSchema, processSchema } from './joint-options';
 import { kitRequestSchema } from './kit-request';
-import { personSchema } from './library-fields';
+import { personSchema, versionNumberSchema } from './library-fields';
 import { listQueryFields, pageOf, queryId } from './library-list';
 
 /**
@@ -18,7 +18,7 @@ export const recordKitSchema = z.object({
     .uuid({ error: () => 'presetId must be the id of a preset' })
     .nullable()
     .default(null),
-  presetVersion: z.number().int().min(1).nullable().default(null),
+  presetVersion: versionNumberSchema('presetVersion').nullable().default(null),
   // Left out: the preset's printer profile (if any). null: none, even when the preset names one.
   printerProfileId: z
     .uuid({ error: () => 'printerProfileId must be the id of a printer profile' })

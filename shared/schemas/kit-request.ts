@@ -6,6 +6,7 @@ import { dovetailOptionsSchema } from './kit-dovetail-options';
 import { keyOptionsSchema } from './kit-key-options';
 import { fitClassSchema, materialSchema, processSchema } from './joint-options';
 import { mmField } from './kit-number-fields';
+import { plainText } from './plain-text';
 
 /** Default largest chord deviation of round shapes, mm (issue 3). */
 export const DEFAULT_CHORD_TOLERANCE_MM = 0.02;
@@ -20,14 +21,17 @@ export const DEFAULT_CHORD_TOLERANCE_MM = 0.02;
  */
 export const materialTuningSchema = z.object(
   {
-    name: z
-      .string({ error: () => 'materialTuning name must be text: the name of a team material' })
-      .trim()
-      .min(1, { error: () => 'materialTuning name must not be empty: give the team material’s name' })
-      .max(80, {
-        error: (iss) =>
-          `materialTuning name must be at most 80 characters; it has ${String((iss.input as string).length)}`,
-      }),
+    name: plainText(
+      z
+        .string({ error: () => 'materialTuning name must be text: the name of a team material' })
+        .trim()
+        .min(1, { error: () => 'materialTuning name must not be empty: give the team material’s name' })
+        .max(80, {
+          error: (iss) =>
+            `materialTuning name must be at most 80 characters; it has ${String((iss.input as string).length)}`,
+        }),
+      'materialTuning name',
+    ),
     clearanceAdjustment: mmField('materialTuning clearance adjustment', { min: -0.5, max: 0.5 }),
   },
   { error: () => 'materialTuning must be an object with a name and a clearanceAdjustment in mm' },
@@ -42,12 +46,14 @@ const sharedFields = {
   clearance: mmField('clearance per side', { min: 0, max: 1 }).optional(),
   calibrationOffset: mmField('calibration offset', { min: -0.5, max: 0.5 }).optional(),
   // Whose calibration the offset is, in words the fit derivation repeats (e.g. a printer profile's fit test).
-  calibrationSource: z
-    .string({ error: () => 'calibrationSource must be text' })
-    .trim()
-    .min(1)
-    .max(200, { error: () => 'calibrationSource must be at most 200 characters' })
-    .optional(),
+  calibrationSource: plainText(
+    z
+      .string({ error: () => 'calibrationSource must be text' })
+      .trim()
+      .min(1)
+      .max(200, { error: () => 'calibrationSource must be at most 200 characters' }),
+    'calibrationSource',
+  ).optional(),
   materialTuning: materialTuningSchema.optional(),
   face: faceSchema,
   format: z.enum(['binary', 'ascii'], { error: () => 'format must be "binary" or "ascii"' }).default('binary'),

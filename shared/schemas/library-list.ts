@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 /** Most rows one page of a team library list may hold. */
 export const MAX_PAGE_SIZE = 100;
@@ -9,7 +10,8 @@ export const DEFAULT_PAGE_SIZE = 20;
 const blankToUndefined = (value: unknown) => (value === '' ? undefined : value);
 
 /**
- * An optional query-string filter: trimmed text, at most `max` characters; "" counts as not given.
+ * An optional query-string filter: trimmed text, at most `max` characters, no control characters; ""
+ * counts as not given.
  *
  * @param what - the filter in words, for the message
  * @param max - longest accepted value; default 100
@@ -19,11 +21,13 @@ const blankToUndefined = (value: unknown) => (value === '' ? undefined : value);
 export function queryText(what: string, max = 100) {
   return z.preprocess(
     blankToUndefined,
-    z
-      .string({ error: () => `${what} must be text` })
-      .trim()
-      .max(max, { error: () => `${what} must be at most ${max} characters` })
-      .optional(),
+    plainText(
+      z
+        .string({ error: () => `${what} must be text` })
+        .trim()
+        .max(max, { error: () => `${what} must be at most ${max} characters` }),
+      what,
+    ).optional(),
   );
 }
 

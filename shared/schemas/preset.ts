@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { libraryNameSchema, notesSchema, personSchema, tagsSchema } from './library-fields';
+import { libraryNameSchema, notesSchema, personSchema, tagsSchema, versionNumberSchema } from './library-fields';
 import { listQueryFields, pageOf, queryId, queryText } from './library-list';
 import { fitClassSchema, materialSchema } from './joint-options';
 import { presetSettingsSchema, type PresetSettings, type PresetSettingsInput } from './preset-settings';
@@ -32,10 +32,7 @@ export type ParsedPresetInput = z.output<typeof presetInputSchema>;
  * any of the fields to change. A save based on an older version is refused with 409 and the current preset.
  */
 export const presetPatchSchema = z.object({
-  baseVersion: z
-    .number({ error: () => 'baseVersion (the version this edit is based on) is required' })
-    .int({ error: () => 'baseVersion must be a whole number' })
-    .min(1, { error: () => 'baseVersion starts at 1' }),
+  baseVersion: versionNumberSchema('baseVersion', 'baseVersion (the version this edit is based on) is required'),
   name: libraryNameSchema.optional(),
   description: notesSchema.optional(),
   tags: tagsSchema.optional(),

@@ -4,6 +4,7 @@ import { fitClassSchema, materialSchema, processSchema } from './joint-options';
 import { libraryNameSchema, notesSchema, personSchema } from './library-fields';
 import { listQueryFields, pageOf } from './library-list';
 import { mmField } from './kit-number-fields';
+import { plainText } from './plain-text';
 
 /** Most calibration entries one profile keeps: 8 materials × 3 fit classes, with room to spare. */
 export const MAX_CALIBRATION_ENTRIES = 48;
@@ -21,12 +22,14 @@ export const calibrationEntrySchema = z.object({
   fit: fitClassSchema,
   offsetMm: mmField('calibration offset', { min: -0.5, max: 0.5 }),
   measuredOn: z.iso.date({ error: () => 'measuredOn must be a date such as 2026-01-12' }),
-  source: z
-    .string()
-    .trim()
-    .min(1, { error: () => 'Say where the offset came from.' })
-    .max(200, { error: () => 'Use at most 200 characters for the source.' })
-    .default('entered by hand'),
+  source: plainText(
+    z
+      .string()
+      .trim()
+      .min(1, { error: () => 'Say where the offset came from.' })
+      .max(200, { error: () => 'Use at most 200 characters for the source.' }),
+    'source',
+  ).default('entered by hand'),
 });
 export type CalibrationEntry = z.output<typeof calibrationEntrySchema>;
 export type CalibrationEntryInput = z.input<typeof calibrationEntrySchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 /** Team roles, strongest first: owner (everything), editor (create and change), viewer (read, download). */
 export const roleSchema = z.enum(['owner', 'editor', 'viewer'], { error: () => 'Pick owner, editor or viewer.' });
@@ -7,12 +8,15 @@ export type Role = z.infer<typeof roleSchema>;
 /** How strong each role is; a route that needs `editor` also admits `owner`. */
 export const roleRank: Record<Role, number> = { owner: 3, editor: 2, viewer: 1 };
 
-/** A team name: trimmed, 1 to 80 characters, stored and shown exactly as written. */
-export const teamNameSchema = z
-  .string({ error: () => 'Enter a team name.' })
-  .trim()
-  .min(1, { error: () => 'Enter a team name.' })
-  .max(80, { error: () => 'Use at most 80 characters.' });
+/** A team name: trimmed, 1 to 80 characters without control characters, stored and shown as written. */
+export const teamNameSchema = plainText(
+  z
+    .string({ error: () => 'Enter a team name.' })
+    .trim()
+    .min(1, { error: () => 'Enter a team name.' })
+    .max(80, { error: () => 'Use at most 80 characters.' }),
+  'team name',
+);
 
 /** One of the signed-in user's teams, with their role in it. */
 export const teamSummarySchema = z.object({ id: z.string(), name: z.string(), role: roleSchema });

@@ -2,6 +2,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { Executor } from '../../db/executor';
 import { presetVersions } from '../../db/schema';
 import type { PresetFields } from './presets.repository';
+import { MAX_VERSION } from '../../../shared/schemas/library-fields';
 
 export interface NewVersion extends PresetFields {
   presetId: string;
@@ -38,7 +39,9 @@ export function listVersions(db: Executor, presetId: string) {
     .orderBy(desc(presetVersions.version));
 }
 
+/** One version of a preset, or null; a number no integer column holds (a version from a URL) names none. */
 export async function findVersion(db: Executor, presetId: string, version: number) {
+  if (!Number.isSafeInteger(version) || version < 1 || version > MAX_VERSION) return null;
   const [row] = await db
     .select()
     .from(presetVersions)
