@@ -6,8 +6,8 @@ import { gradedBlock } from '../geometry/coupon/graded-block';
 import { keyOnBed } from '../geometry/key-on-bed';
 import { keyPin } from '../geometry/key-pin';
 import { geom3ToMesh, type TriangleMesh } from '../geometry/mesh';
-import { keySection } from '../geometry/section/key-section';
 import { offsetConvexPolygon } from '../geometry/section/offset-convex-polygon';
+import { pocketSection } from '../geometry/section/pocket-section';
 import type { ResolvedKeyCouponRequest } from '../schemas/coupon-request';
 import type { CouponManifest, CouponPocket } from './coupon-manifest';
 import { describePart } from './describe-part';
@@ -37,14 +37,16 @@ export function keyCoupon(
 ): { manifest: CouponManifest; meshes: Map<string, TriangleMesh> } {
   const k = request.key;
   const sectionParams = { shape: k.shape, width: k.width, length: k.length, flat: k.flat, chordTolerance: 0.02 };
-  const section = keySection(sectionParams);
+  // Keys from keySection (a round one inscribed in its circle), pockets from pocketSection (a round one
+  // circumscribing it, flats at r + each grade), as in a kit, so each pocket leaves at least its grade.
+  const nominal = pocketSection(sectionParams);
   const grades = couponGrades(request.clearanceFrom, request.clearanceTo, request.clearanceStep);
   const byScale = k.strategy === 'scale';
   const pocketDepth = Math.min(k.depth, COUPON_POCKET_DEPTH_MM);
   const thickness = pocketDepth + COUPON_FLOOR_MM;
   const keyLength = 2 * pocketDepth - k.endGap;
   const chamfer = Math.min(k.chamfer ?? 0.4, keyLength / 4, k.width / 4);
-  const outlines = grades.map((c) => (byScale ? section : offsetConvexPolygon(section, c)));
+  const outlines = grades.map((c) => (byScale ? nominal : offsetConvexPolygon(nominal, c)));
   const cell = bounds(outlines[outlines.length - 1]!);
   const layout = couponPlateLayout(grades.length, cell.w, cell.h);
   const marks = grades.map((_, i) => String(i + 1));
@@ -100,6 +102,13 @@ export function keyCoupon(
           `coupon pockets are ${pocketDepth} mm deep (not ${k.depth} mm) so the plate prints quickly; the fit across the key does not depend on depth`,
         ]
       : [];
+  // A scaled key shrinks towards its centre, so its flat (nearer the centre than its circle) gains less.
+  if (byScale && k.shape === 'round' && k.flat > 0) {
+    const share = Math.round(((k.width / 2 - k.flat) / (k.width / 2)) * 1000) / 10;
+    warnings.push(
+      `each scaled key leaves its pocket's clearance around its circle but only ${share} % of it at its flat (${k.flat} mm deep on a ${k.width} mm key)`,
+    );
+  }
   return {
     manifest: {
       units: 'mm',

@@ -7,6 +7,7 @@ export { dovetailRail, type DovetailRailParams } from './dovetail-rail';
 export { dovetailSlotCutter, type DovetailSlotCutterParams } from './dovetail-slot-cutter';
 export { placeRails, type PlaceRailsParams, type RailPlacement } from './place-rails';
 export { keySection, type KeySectionParams, type KeyShape } from './section/key-section';
+export { pocketSection } from './section/pocket-section';
 export { dovetailSection, type DovetailSectionParams } from './section/dovetail-section';
 export { offsetConvexPolygon } from './section/offset-convex-polygon';
 export { segmentsForRadius, MIN_ROUND_SEGMENTS, MAX_ROUND_SEGMENTS } from './section/segments-for-radius';

@@ -10,7 +10,10 @@ export const CUTTER_OVERSHOOT_MM = 1;
 
 /** Parameters of one pocket cutter, in mm. */
 export interface PocketCutterParams {
-  /** The key's nominal cross-section (from `keySection`), counter-clockwise, centred on the origin. */
+  /**
+   * The pocket's nominal outline (from `pocketSection`: the key's section, or for a round key the polygon
+   * circumscribing its circle), counter-clockwise, centred on the origin, mm.
+   */
   readonly section: readonly Vec2[];
   /** Growth of the section per side (the fit clearance), mm; 0 for the `scale` strategy. */
   readonly clearance: number;
@@ -25,16 +28,20 @@ export interface PocketCutterParams {
 }
 
 /**
- * The solid to subtract from one half to make one pocket: the key's section grown by the clearance per
- * side, `depth` deep into the half, flared by the entry chamfer at the face, and reaching
+ * The solid to subtract from one half to make one pocket: the pocket's nominal outline grown by the
+ * clearance per side, `depth` deep into the half, flared by the entry chamfer at the face, and reaching
  * {@link CUTTER_OVERSHOOT_MM} past z = 0 into the other half. Lofted without booleans: a closed, outward
- * 2-manifold. Half B's cutter is half A's mirrored in z = 0.
+ * 2-manifold. Half B's cutter is half A's mirrored in z = 0. Every flat moves out by exactly the clearance
+ * (and the flare's by clearance + entry chamfer), so a round pocket from `pocketSection` keeps its flats
+ * tangent to the circle of radius r + clearance and its corners in the order of the key's.
  *
  * @param params - see {@link PocketCutterParams}
  * @returns the cutter as a JSCAD geom3
  * @example
- * pocketCutter({ section: keySection({ shape: 'square', width: 10 }), clearance: 0.15, depth: 8, half: 'A' });
+ * pocketCutter({ section: pocketSection({ shape: 'square', width: 10 }), clearance: 0.15, depth: 8, half: 'A' });
  * // x and y from −5.15 to 5.15, z from −8 to 1
+ * pocketCutter({ section: pocketSection({ shape: 'round', width: 8 }), clearance: 0.16, depth: 8, half: 'A' });
+ * // flats facing ±x at ±4.16: 8.32 mm flat to flat
  */
 export function pocketCutter(params: PocketCutterParams): Geom3 {
   const { depth, half } = params;

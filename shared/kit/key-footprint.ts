@@ -4,16 +4,17 @@ import type { Vec2 } from '../geometry/units';
 import type { KeyOptions } from '../schemas/kit-key-options';
 
 /**
- * The outline the layout keeps walls around: the pocket's mouth (the key section grown by the clearance
- * and the entry chamfer), as the smallest circle about the centre for round keys, or the axis-aligned box
- * for the others. Both contain the real outline, so the walls are at least the margin.
+ * The outline the layout keeps walls around: the pocket's mouth (the pocket's nominal outline grown by the
+ * clearance and the entry chamfer), as the smallest circle about the centre for round keys, or the
+ * axis-aligned box for the others. Both contain the real outline, so the walls are at least the margin.
  *
- * @param section - the key's nominal section, mm, centred on the origin
+ * @param section - the pocket's nominal outline (`pocketSection`: the key's section, or for a round key the
+ *   polygon circumscribing its circle), mm, centred on the origin
  * @param growth - clearance plus entry chamfer per side, mm (0 or more)
  * @param round - true for round keys (a circle footprint)
  * @returns a layout footprint in mm
  * @example
- * keyFootprint(keySection({ shape: 'square', width: 10 }), 0.2, false); // { kind: 'rect', width: 10.4, height: 10.4 }
+ * keyFootprint(pocketSection({ shape: 'square', width: 10 }), 0.2, false); // { kind: 'rect', width: 10.4, height: 10.4 }
  */
 export function keyFootprint(section: readonly Vec2[], growth: number, round: boolean): Footprint {
   const mouth = growth > 0 ? offsetConvexPolygon(section, growth) : section;

@@ -5,7 +5,9 @@ const mm = (v: number) => `${Math.round(v * 1000) / 1000} mm`;
 
 /**
  * Warnings a key kit adds to the fit engine's: a computed key scale below 80 %, a rect key whose scale
- * leaves a different gap along its length, a round key with no flat (it rests on a narrow facet).
+ * leaves a different gap along its length, a round key whose scale leaves less at its flat than around its
+ * circle (the flat is nearer the centre, (1 − s)·(r − flat) instead of (1 − s)·r), a round key with no flat
+ * (it rests on a narrow facet).
  *
  * @param key - resolved key options
  * @param keyScale - the print scale (1 for strategy "clearance")
@@ -25,6 +27,12 @@ export function keyWarnings(key: KeyOptions, keyScale: number, clearancePerSide:
     const along = ((1 - keyScale) * key.length) / 2;
     warnings.push(
       `a rect key scaled to ${pct(keyScale)} leaves ${mm(clearancePerSide)} per side across its ${mm(key.width)} width but ${mm(along)} per side along its ${mm(key.length)} length`,
+    );
+  }
+  if (key.strategy === 'scale' && key.shape === 'round' && key.flat > 0) {
+    const atFlat = (1 - keyScale) * (key.width / 2 - key.flat);
+    warnings.push(
+      `a round key scaled to ${pct(keyScale)} leaves ${mm(clearancePerSide)} per side around its ${mm(key.width)} circle but ${mm(atFlat)} at its ${mm(key.flat)} flat`,
     );
   }
   if (key.shape === 'round' && key.flat <= 0) {

@@ -3,7 +3,7 @@ import { keyPin } from '../geometry/key-pin';
 import { placeKeys } from '../geometry/layout';
 import { pocketCutter, type PocketCutterParams } from '../geometry/pocket-cutter';
 import type { KeySectionParams } from '../geometry/section/key-section';
-import { keySection } from '../geometry/section/key-section';
+import { pocketSection } from '../geometry/section/pocket-section';
 import { mergeSolids } from '../geometry/solid/merge-solids';
 import type { Vec2 } from '../geometry/units';
 import { keyLengthOf } from '../schemas/kit-key-options';
@@ -33,15 +33,17 @@ export function keyKitPlan(request: ResolvedKeyKitRequest): KitPlan {
   const k = request.key;
   const fit = keyKitFit(request);
   const sectionParams: KeySectionParams = { ...k, chordTolerance: request.chordTolerance };
-  const section = keySection(sectionParams);
+  // The key is keySection (a round one inscribed in its circle), the pocket pocketSection (a round one
+  // circumscribing it), so no gap is below the clearance; square, rect and hex use the key's section.
+  const outline = pocketSection(sectionParams);
   const keyLength = keyLengthOf(k);
   const pocket = {
-    section,
+    section: outline,
     clearance: fit.pocketGrowth,
     depth: keyLength / 2 + k.bottomGap,
     entryChamfer: k.entryChamfer,
   };
-  const footprint = keyFootprint(section, fit.pocketGrowth + k.entryChamfer, k.shape === 'round');
+  const footprint = keyFootprint(outline, fit.pocketGrowth + k.entryChamfer, k.shape === 'round');
   const positions = placeKeys({
     face: request.face,
     footprint,

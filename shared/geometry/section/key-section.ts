@@ -24,7 +24,9 @@ export interface KeySectionParams {
  * Square and rect keys are axis-aligned; a hex has its flats facing ±x (`width` is flat-to-flat across x);
  * a round key is a polygon inscribed in the circle of diameter `width` with facets facing ±x and ±y
  * (segments from {@link segmentsForRadius}); a round key with a flat is cut by the line x = −(r − flat) and
- * its arc re-sampled between the flat's ends, so every corner lies exactly on the circle.
+ * its arc re-sampled between the flat's ends, so every corner lies exactly on the circle. A round key thus
+ * never reaches past its circle; its pocket is the circumscribing polygon (`pocketSection`), never this one
+ * grown, or the pocket's flats would fall short of r + clearance by the sagitta.
  *
  * With `inset` > 0 it returns the end ring of a 45° chamfer `inset` mm deep, with the same number of
  * corners in the same order as the full section, so the two can be lofted corner to corner: polygons move

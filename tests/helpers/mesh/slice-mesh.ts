@@ -6,8 +6,13 @@ export type Axis = 0 | 1 | 2;
  * Slices a mesh with the plane `axis = value` and returns the crossing points projected on the other two
  * axes (in ascending axis order: x-slice → [y, z], y-slice → [x, z], z-slice → [x, y]). Each triangle that
  * straddles the plane adds the two points where its edges cross it. Choose `value` away from any corner.
+ * Takes a kit file's float32 mesh or a solid's unsnapped float64 triangles (`solidTriangles`).
  */
-export function sliceMesh(mesh: TriangleMesh, axis: Axis, value: number): Array<[number, number]> {
+export function sliceMesh(
+  mesh: TriangleMesh | { readonly positions: Float64Array },
+  axis: Axis,
+  value: number,
+): Array<[number, number]> {
   const [u, v] = ([0, 1, 2] as const).filter((a) => a !== axis) as [Axis, Axis];
   const p = mesh.positions;
   const out: Array<[number, number]> = [];

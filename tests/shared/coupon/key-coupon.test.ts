@@ -6,6 +6,15 @@ import { MARK_DEPTH_MM } from '../../../shared/geometry/coupon/graded-block';
 import { edgeCheck } from '../../helpers/mesh/edge-check';
 import { loadManifold, manifoldOf } from '../../helpers/mesh/manifold-check';
 import { threeParse } from '../../helpers/mesh/stl-readers';
+import {
+  boundaryGap,
+  convexHull,
+  edgeDistances,
+  keyInFace,
+  type Point,
+  snapStep,
+} from '../../helpers/mesh/section-gap';
+import { sliceMesh, support } from '../../helpers/mesh/slice-mesh';
 import { extent, sliceNear } from './coupon-helpers';
 
 type Wasm = Awaited<ReturnType<typeof loadManifold>>;
@@ -42,6 +51,8 @@ describe('keyCoupon', () => {
     ['square', { shape: 'square', width: 8, depth: 4 }],
     ['hex', { shape: 'hex', width: 7, depth: 4 }],
     ['rect', { shape: 'rect', width: 6, length: 9, depth: 5 }],
+    // Round pockets circumscribe the circle r + c with flats facing ±x (pocketSection), so across x too.
+    ['round', { shape: 'round', width: 6, depth: 4 }],
   ])('makes each %s pocket key width + 2 × its clearance wide at mid-depth, within 1 µm', (_name, key) => {
     const request = keyRequest(key);
     const { manifest, meshes } = keyCoupon(wasm, request);
@@ -54,6 +65,65 @@ describe('keyCoupon', () => {
       expect(Math.abs(measured - (key.width + 2 * pocket.clearancePerSide))).toBeLessThan(0.001);
     }
   });
+
+  it.each([
+    ['clearance', { shape: 'round', width: 8, depth: 4 }],
+    ['scale', { shape: 'round', width: 8, depth: 4, strategy: 'scale' }],
+    ['clearance, with a flat', { shape: 'round', width: 8, depth: 4, flat: 0.8 }],
+  ])(
+    'leaves at least each grade between its key and its round pocket, flats at r + grade, when the strategy is %s',
+    (_name, key) => {
+      const request = keyRequest(key);
+      const { manifest, meshes } = keyCoupon(wasm, request);
+      const plate = meshes.get('coupon-plate.stl')!;
+      const top = manifest.parts[0]!.bbox.max[2];
+      const r = key.width / 2;
+      const flat = 'flat' in key ? key.flat : 0;
+      const byScale = 'strategy' in key;
+      for (const pocket of manifest.pockets) {
+        const c = pocket.clearancePerSide;
+        const keyMesh = meshes.get(pocket.keyFile ?? 'key.stl')!;
+        const s = pocket.keyScale ?? 1;
+        // The key rests on its flat, s·(r − flat) below its axis; a full round key is symmetric about it.
+        const mid = sliceMesh(keyMesh, 0, 0.013).map(([, z]) => z);
+        const axisZ = flat > 0 ? s * (r - flat) : (Math.min(...mid) + Math.max(...mid)) / 2;
+        // manifold-3d keeps the plate's corners as float32 (≤ 4e-6 mm at 50 mm); the key file is snapped.
+        const tol = Math.SQRT2 * snapStep(keyMesh) + 1e-5;
+        const reach = r + c + 1;
+        // Below the engraved marks (0.6 mm), at mid-depth and just above the pocket floor.
+        for (const z of [top - 0.9, top - key.depth / 2, top - key.depth + 0.3]) {
+          const points = sliceNear(plate, z, pocket.position, reach, reach);
+          const hole = convexHull(
+            points.map(([x, y]) => [x - pocket.position[0], y - pocket.position[1]] as Point),
+            1e-3,
+          );
+          for (const at of [-2, 0.013, 2.9]) {
+            const keyHull = keyInFace(keyMesh, at, axisZ, 1e-3);
+            expect(boundaryGap(keyHull, hole)).toBeGreaterThanOrEqual(c - tol);
+          }
+          // Elementary geometry: a polygon whose every edge line lies at a from the centre circumscribes the
+          // circle of radius a; here a = r + c (r for the scale strategy's nominal pockets). A flat is its
+          // own line, r − flat + c out on the −x side.
+          const grown = byScale ? 0 : c;
+          const leftmost = Math.min(...hole.map(([x]) => x));
+          edgeDistances(hole).forEach((d, i) => {
+            const ends = [hole[i]!, hole[(i + 1) % hole.length]!];
+            const isFlat = flat > 0 && ends.every(([x]) => Math.abs(x - leftmost) < 1e-4);
+            expect(Math.abs(d - (isFlat ? r - flat + grown : r + grown))).toBeLessThan(0.001);
+          });
+          // Flats face ±x and ±y (n a multiple of 4): 2(r + c) flat to flat, the declared key width + 2 × grade.
+          if (flat === 0) {
+            expect(Math.abs(support(hole, [1, 0]) + support(hole, [-1, 0]) - (key.width + 2 * grown))).toBeLessThan(
+              1e-5,
+            );
+            expect(Math.abs(support(hole, [0, 1]) + support(hole, [0, -1]) - (key.width + 2 * grown))).toBeLessThan(
+              1e-5,
+            );
+          }
+        }
+      }
+    },
+  );
 
   it('engraves a distinct mark in front of each pocket, left to right in grade order', () => {
     const { manifest, meshes } = keyCoupon(

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { geom3ToMesh, meshBounds, meshVolume } from '../../../shared/geometry/mesh';
 import { CUTTER_OVERSHOOT_MM, pocketCutter } from '../../../shared/geometry/pocket-cutter';
 import { keySection } from '../../../shared/geometry/section/key-section';
+import { pocketSection } from '../../../shared/geometry/section/pocket-section';
 import { edgeCheck } from '../../helpers/mesh/edge-check';
 import { sliceMesh, support } from '../../helpers/mesh/slice-mesh';
 
@@ -45,6 +46,24 @@ describe('pocketCutter', () => {
       const centre = 3 * d[0] - 2 * d[1];
       // Apothem of the hex is w/2 = 4 mm; the pocket's is 4.2 mm.
       expect(support(slice, d) - centre).toBeCloseTo(4.2, 3);
+    }
+  });
+
+  it('puts every flat of a round pocket at r + clearance, in the flare at r + clearance + entry, when measured on slices', () => {
+    const section = pocketSection({ shape: 'round', width: 8, chordTolerance: 0.02 });
+    const mesh = geom3ToMesh(pocketCutter({ section, clearance: 0.16, depth: 8, half: 'A', entryChamfer: 0.5 }));
+    expect(edgeCheck(mesh)).toMatchObject({ unmatched: 0, repeated: 0, degenerate: 0 });
+    // 32 flats facing k · 2π/32; elementary geometry: an n-gon whose flats all lie at a from the centre
+    // circumscribes the circle of radius a. Mouth at z = 0: the flare adds the entry chamfer.
+    for (const [z, apothem] of [
+      [-4, 4.16],
+      [-0.001, 4.16 + 0.5 - 0.001],
+    ] as const) {
+      const slice = sliceMesh(mesh, 2, z);
+      for (let k = 0; k < 32; k++) {
+        const d = [Math.cos((k * Math.PI) / 16), Math.sin((k * Math.PI) / 16)] as const;
+        expect(support(slice, d)).toBeCloseTo(apothem, 3);
+      }
     }
   });
 });

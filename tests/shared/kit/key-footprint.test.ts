@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { keySection } from '../../../shared/geometry/section/key-section';
+import { pocketSection } from '../../../shared/geometry/section/pocket-section';
 import { keyFootprint, keyLabel } from '../../../shared/kit/key-footprint';
 
 describe('keyFootprint', () => {
   it('is the pocket mouth box when the key is square', () => {
-    const f = keyFootprint(keySection({ shape: 'square', width: 10 }), 0.2, false);
+    const f = keyFootprint(pocketSection({ shape: 'square', width: 10 }), 0.2, false);
     expect(f.kind).toBe('rect');
     if (f.kind === 'rect') {
       expect(f.width).toBeCloseTo(10.4, 12);
@@ -13,9 +13,11 @@ describe('keyFootprint', () => {
   });
 
   it('is a circle through the mouth corners when the key is round', () => {
-    const f = keyFootprint(keySection({ shape: 'round', width: 8 }), 0.2, true);
-    // The n-gon's flats move out by 0.2 mm, its corners by 0.2 / cos(π/n) (derived).
-    expect(f).toEqual({ kind: 'circle', diameter: expect.closeTo(2 * (4 + 0.2 / Math.cos(Math.PI / 32)), 9) });
+    const f = keyFootprint(pocketSection({ shape: 'round', width: 8 }), 0.2, true);
+    // The round pocket circumscribes the circle r + 0.2: its corners lie at (4 + 0.2) / cos(π/n) (elementary
+    // geometry: a regular n-gon with apothem a has circumradius a / cos(π/n)). Was 2 · (4 + 0.2 / cos(π/32))
+    // while the pocket grew the inscribed key polygon.
+    expect(f).toEqual({ kind: 'circle', diameter: expect.closeTo((2 * (4 + 0.2)) / Math.cos(Math.PI / 32), 9) });
   });
 });
 

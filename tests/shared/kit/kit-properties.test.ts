@@ -4,6 +4,7 @@ import { GeometryError } from '../../../shared/geometry/geometry-error';
 import type { TriangleMesh } from '../../../shared/geometry/mesh';
 import { geom3ToMesh, meshVolume } from '../../../shared/geometry/mesh';
 import { keySection } from '../../../shared/geometry/section/key-section';
+import { pocketSection } from '../../../shared/geometry/section/pocket-section';
 import { writeBinaryStl } from '../../../shared/geometry/stl';
 import { buildKit } from '../../../shared/kit/build-kit';
 import { dovetailKitPlan } from '../../../shared/kit/dovetail-kit-plan';
@@ -153,13 +154,17 @@ function checkPocketsHoldKey(request: ResolvedKeyKitRequest, kit: ReturnType<typ
   const keyMesh = meshOfFile(kit.files[0]!.bytes);
   const s = manifest.keyScale ?? 1;
   const growth = manifest.keyScale === undefined ? manifest.clearancePerSide : 0;
-  const section = keySection({
+  const params = {
     shape: k.shape,
     width: k.width,
     length: k.length,
     flat: k.flat,
     chordTolerance: request.chordTolerance,
-  }).map(([x, y]) => [x, y] as [number, number]);
+  };
+  const section = keySection(params).map(([x, y]) => [x, y] as [number, number]);
+  // The pocket's nominal outline: the key's section, or for a round key the polygon circumscribing its
+  // circle, with edges parallel to the key's (pocketSection).
+  const outline = pocketSection(params).map(([x, y]) => [x, y] as [number, number]);
   // The key lies on the bed, axis along x, lifted so its lowest point is at z = 0 (keyOnBed): bed (y, z)
   // is face (z + s · min x of the section, −y). Slice it across the middle of its length.
   const lift = s * Math.min(...section.map(([x]) => x));
@@ -178,14 +183,15 @@ function checkPocketsHoldKey(request: ResolvedKeyKitRequest, kit: ReturnType<typ
     // direction moves up to √2/2 grid steps; √2 × the sum bounds a difference of two, plus float32 rounding.
     const tol = Math.SQRT2 * (snapGrid(mesh) + snapGrid(keyMesh)) + 1e-5;
     // Pockets are kept `margin` apart around their layout footprints: half a margin round one picks it alone.
-    const foot = keyFootprint(section, growth + k.entryChamfer, k.shape === 'round');
+    const foot = keyFootprint(outline, growth + k.entryChamfer, k.shape === 'round');
     for (const p of part.positions!) {
       const pocket = near(slice, p, foot, k.margin / 2);
       for (const d of dirs) {
-        // One-sided support along each flat's outward normal. Strategy "clearance": the pocket's flat is the
-        // key's moved out by c. Strategy "scale": the pocket is nominal and the key s × nominal about the centre.
+        // One-sided support along each flat's outward normal. Strategy "clearance": the pocket's flat is its
+        // nominal outline's moved out by c. Strategy "scale": the pocket is nominal and the key s × nominal
+        // about the centre. The outline's flat is the key's (square, rect, hex) or tangent to r (round).
         const gap = support(pocket, d) - support(keySlice, d);
-        expect(Math.abs(gap - growth - (1 - s) * support(section, d))).toBeLessThan(tol);
+        expect(Math.abs(gap - growth - support(outline, d) + s * support(section, d))).toBeLessThan(tol);
       }
       // Across x (the direction `width` is measured in) the gap per side is the declared clearance.
       const width = (pts: Array<[number, number]>) => support(pts, [1, 0]) + support(pts, [-1, 0]);
