@@ -28,6 +28,8 @@ import { createDroppingMailer, type Mailer } from './mail/mailer';
 import { createLinks } from './mail/links';
 import { defaultAuthSettings, type AuthSettings } from './config/auth-settings';
 import type { AppContext } from './app-context';
+import type { Geometry } from './geometry/geometry';
+import { sharedGeometryPool } from './geometry/geometry-pool';
 
 export interface AppDeps {
   db: Database;
@@ -40,6 +42,8 @@ export interface AppDeps {
   outbox?: Outbox;
   /** App address and rate limits; defaults suit tests of other features. */
   auth?: AuthSettings;
+  /** Where solids are built; default the process's geometry thread pool. */
+  geometry?: Geometry;
 }
 
 // Kit requests are small JSON; 256 kB leaves room for a 1000-point polygon face.
@@ -53,6 +57,7 @@ export function createApp({
   mailer,
   outbox,
   auth = defaultAuthSettings,
+  geometry,
 }: AppDeps): express.Express {
   const ctx: AppContext = {
     db,
@@ -60,6 +65,7 @@ export function createApp({
     sessions: createSessions(db),
     mailer: mailer ?? createDroppingMailer(logger),
     links: createLinks(auth.appUrl),
+    geometry: geometry ?? sharedGeometryPool(),
   };
   const app = express();
   app.disable('x-powered-by');
@@ -72,9 +78,9 @@ export function createApp({
   api.use(sameOrigin(auth.appUrl));
   api.use(authenticate(ctx.sessions));
   api.use(healthRoutes(db));
-  api.use(kitRoutes());
-  api.use(couponRoutes());
-  api.use(authRoutes(ctx, auth.rateLimits));
+  api.use(kitRoutes(ctx));
+  api.use(couponRoutes(ctx));
+  api.use(authRoutes(ctx, { limits: auth.rateLimits, scope: auth.rateLimitScope }));
   api.use(accountRoutes(ctx));
   api.use(teamsRoutes(ctx));
   api.use(membersRoutes(ctx));

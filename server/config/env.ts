@@ -33,6 +33,11 @@ const envSchema = z.object({
   RATE_LIMIT_SIGN_IN: z.coerce.number().int().positive().default(10),
   RATE_LIMIT_SIGN_UP: z.coerce.number().int().positive().default(5),
   RATE_LIMIT_RESET: z.coerce.number().int().positive().default(5),
+  // Counters are kept in PostgreSQL under this name, shared by every server process that uses the same one.
+  RATE_LIMIT_SCOPE: z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{1,40}$/, { error: () => 'must be 1–40 letters, digits, - or _' })
+    .default('seamwright'),
 });
 export type Env = Omit<z.infer<typeof envSchema>, 'MAIL_CATCHER'> & { MAIL_CATCHER: 'on' | 'off' };
 

@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { rateLimit, type Store } from 'express-rate-limit';
 import { AppError } from '../errors/app-error';
 
 export interface RateLimitSettings {
@@ -10,12 +10,15 @@ export interface RateLimitSettings {
 
 /**
  * A per-address limit for one family of routes (sign-in, sign-up, reset). Past it the request is
- * answered 429 in the usual error shape, with Retry-After in seconds.
+ * answered 429 in the usual error shape, with Retry-After in seconds. The counts live in `store`, shared by
+ * every server process on the database; when the store cannot answer, the request fails (503 while the
+ * database is down) rather than slipping past the limit.
  */
-export function limitRate(what: string, { windowMs, limit }: RateLimitSettings): RequestHandler {
+export function limitRate(what: string, { windowMs, limit }: RateLimitSettings, store: Store): RequestHandler {
   return rateLimit({
     windowMs,
     limit,
+    store,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
     handler: (req, res, next) => {

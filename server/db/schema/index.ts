@@ -12,3 +12,4 @@ export * from './presets';
 export * from './preset-versions';
 export * from './kit-downloads';
 export * from './fit-tests';
+export * from './rate-limits';

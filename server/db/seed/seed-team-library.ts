@@ -12,6 +12,7 @@ import { insertMaterial } from '../../modules/materials/materials.repository';
 import { createWithFirstVersion, saveVersion } from '../../modules/presets/preset-writes';
 import { setArchived } from '../../modules/presets/presets.repository';
 import { recordKit } from '../../modules/kit-history/record-kit.service';
+import { inlineGeometry } from '../../geometry/inline-geometry';
 import { demoKits, demoMaterials, demoPresets, demoPrinters } from './team-library-scenario';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -58,7 +59,7 @@ export async function seedTeamLibrary(
       request: { ...settings, face: kit.face },
       presetId: presetIds.get(kit.preset),
     });
-    const { id } = await recordKit(tx, people[kit.by], teamId, input);
+    const { id } = await recordKit(tx, inlineGeometry, people[kit.by], teamId, input);
     await tx
       .update(kitDownloads)
       .set({ createdAt: new Date(Date.now() - kit.daysAgo * DAY_MS) })

@@ -4,6 +4,7 @@ import { clearSessionCookie, readSessionCookie, writeSessionCookie } from '../..
 import { requireSession, requireUser } from '../../http/current-user';
 import { parseWith } from '../../http/parse';
 import { limitRate, type RateLimitSettings } from '../../http/rate-limit';
+import { PostgresRateLimitStore } from '../rate-limits/postgres-rate-limit-store';
 import {
   resetConfirmSchema,
   resetRequestSchema,
@@ -21,6 +22,12 @@ export interface AuthRateLimits {
   reset: RateLimitSettings;
 }
 
+/** The limits and the database scope their counters live under (see AuthSettings.rateLimitScope). */
+export interface AuthRateLimitConfig {
+  limits: AuthRateLimits;
+  scope: string;
+}
+
 const RESET_ANSWER = 'If an account uses this address, we have sent it a link to choose a new password.';
 
 /**
@@ -28,17 +35,19 @@ const RESET_ANSWER = 'If an account uses this address, we have sent it a link to
  * resend-verification · password-reset/request · password-reset/confirm. Sign-in, sign-up and the
  * mail-sending routes are rate-limited per client address.
  */
-export function authRoutes(ctx: AppContext, limits: AuthRateLimits): Router {
+export function authRoutes(ctx: AppContext, { limits, scope }: AuthRateLimitConfig): Router {
   const router = Router();
   const secure = (req: Request) => req.secure;
-  const resetLimit = limitRate('password reset', limits.reset);
+  const limit = (what: string, family: string, settings: RateLimitSettings) =>
+    limitRate(what, settings, new PostgresRateLimitStore(ctx.db, scope, family));
+  const resetLimit = limit('password reset', 'reset', limits.reset);
 
-  router.post('/auth/sign-up', limitRate('sign-up', limits.signUp), async (req, res) => {
+  router.post('/auth/sign-up', limit('sign-up', 'sign-up', limits.signUp), async (req, res) => {
     const { session, me } = await signUp(ctx, parseWith(signUpSchema, req.body));
     writeSessionCookie(res, session, secure(req));
     res.status(201).json(me);
   });
-  router.post('/auth/sign-in', limitRate('sign-in', limits.signIn), async (req, res) => {
+  router.post('/auth/sign-in', limit('sign-in', 'sign-in', limits.signIn), async (req, res) => {
     const input = parseWith(signInSchema, req.body);
     const { session, me } = await signIn(ctx, input, readSessionCookie(req.headers.cookie));
     writeSessionCookie(res, session, secure(req));
@@ -58,7 +67,7 @@ export function authRoutes(ctx: AppContext, limits: AuthRateLimits): Router {
     await verifyEmail(ctx, parseWith(verifyEmailSchema, req.body).token);
     res.json({ verified: true });
   });
-  router.post('/auth/resend-verification', limitRate('confirmation e-mail', limits.reset), async (req, res) => {
+  router.post('/auth/resend-verification', limit('confirmation e-mail', 'resend', limits.reset), async (req, res) => {
     await resendVerification(ctx, requireUser(req));
     res.status(204).end();
   });

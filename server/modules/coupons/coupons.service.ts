@@ -1,17 +1,15 @@
-import type { Writable } from 'node:stream';
-import { buildCoupon } from '../../../shared/coupon/build-coupon';
+import type { Geometry } from '../../geometry/geometry';
 import type { ResolvedCouponRequest } from '../../../shared/schemas/coupon-request';
-import { downloadName, withManifest, writeZip } from '../kits/kit-zip';
-import { manifoldEngine } from './manifold-engine';
+import { downloadName } from '../kits/kit-zip';
 
 /**
- * Builds a fit-test coupon; returns its download name and a function that streams the zip (STLs,
- * manifest.json with the graded pockets, README.txt with the legend).
+ * Builds a fit-test coupon on a geometry thread; returns its download name and the zip (STLs, manifest.json
+ * with the graded pockets, README.txt with the legend).
  */
-export async function prepareCouponZip(
+export async function buildCouponDownload(
+  geometry: Geometry,
   request: ResolvedCouponRequest,
-): Promise<{ fileName: string; writeTo: (out: Writable) => Promise<void> }> {
-  const { manifest, files } = buildCoupon(await manifoldEngine(), request);
-  const entries = withManifest(manifest, files);
-  return { fileName: downloadName(`${request.joint}-fit-test`, request), writeTo: (out) => writeZip(entries, out) };
+): Promise<{ fileName: string; zip: Uint8Array }> {
+  const { zip } = await geometry.couponZip(request);
+  return { fileName: downloadName(`${request.joint}-fit-test`, request), zip };
 }

@@ -1,7 +1,6 @@
 import { createHash } from 'node:crypto';
 import { Writable } from 'node:stream';
 import type { KitFile } from '../../../shared/kit/build-kit';
-import type { KitManifest } from '../../../shared/kit/kit-manifest';
 import type { KitFileHash } from '../../../shared/schemas/kit-history';
 import { withManifest, writeZip } from '../kits/kit-zip';
 
@@ -16,8 +15,8 @@ export function stlHashes(files: readonly KitFile[]): KitFileHash[] {
     }));
 }
 
-/** The kit as one zip in memory: manifest.json first, then the STLs and README.txt (as POST /api/kits sends it). */
-export async function zipKit(kit: { manifest: KitManifest; files: readonly KitFile[] }): Promise<Buffer> {
+/** A kit or coupon as one zip in memory: manifest.json first, then the STLs and README.txt (as POST /api/kits sends it). */
+export async function zipKit(kit: { manifest: unknown; files: readonly KitFile[] }): Promise<Buffer> {
   const chunks: Buffer[] = [];
   const sink = new Writable({
     write(chunk: Buffer, _encoding, done) {

@@ -7,6 +7,7 @@ import { kitDownloadQuerySchema, kitHistoryQuerySchema, recordKitSchema } from '
 import { getKitEntry, listKitHistory } from './kit-history.service';
 import { checkKit, downloadKit } from './rebuild-kit.service';
 import { recordKit } from './record-kit.service';
+import { asBuffer } from '../kits/kit-zip';
 
 const base = '/teams/:teamId/kits';
 const ids = (req: Request) => ({ teamId: uuidParam(req, 'teamId', 'team'), id: uuidParam(req, 'kitId', 'kit') });
@@ -25,7 +26,7 @@ export function kitHistoryRoutes(ctx: AppContext): Router {
     const user = requireUser(req);
     const teamId = uuidParam(req, 'teamId', 'team');
     const input = parseWith(recordKitSchema, req.body, 'kit request');
-    const kit = await recordKit(ctx.db, user, teamId, input);
+    const kit = await recordKit(ctx.db, ctx.geometry, user, teamId, input);
     res
       .status(201)
       .location(`/api/teams/${teamId}/kits/${kit.id}`)
@@ -35,7 +36,7 @@ export function kitHistoryRoutes(ctx: AppContext): Router {
       .set('X-Seamwright-Clearance', String(kit.clearancePerSide))
       .type('application/zip')
       .attachment(kit.fileName)
-      .send(kit.zip);
+      .send(asBuffer(kit.zip));
   });
   router.get(base, async (req, res) => {
     const user = requireUser(req);

@@ -1,26 +1,25 @@
 import type { AppContext } from '../../app-context';
 import type { SessionUser } from '../../auth/sessions';
 import { AppError } from '../../errors/app-error';
-import { buildKit } from '../../../shared/kit/build-kit';
+import type { Geometry } from '../../geometry/geometry';
 import type { KitCheck, KitFileHash } from '../../../shared/schemas/kit-history';
 import { kitRequestSchema } from '../../../shared/schemas/kit-request';
 import { requireTeamRole } from '../teams/team-access';
 import { ENGINE_VERSION } from './engine-version';
-import { stlHashes, zipKit } from './kit-bytes';
 import * as repo from './kit-history.repository';
 
 const NOT_FOUND = 'There is no such kit in this team’s history.';
 
-type Rebuilt = { ok: true; hashes: KitFileHash[]; zip: () => Promise<Buffer> } | { ok: false; reason: string };
+type Rebuilt = { ok: true; hashes: KitFileHash[]; zip: Uint8Array } | { ok: false; reason: string };
 
 // The stored request is a resolved one and parses again to itself; a later Seamwright may refuse it.
-function rebuild(request: unknown): Rebuilt {
+async function rebuild(geometry: Geometry, request: unknown): Promise<Rebuilt> {
   const parsed = kitRequestSchema.safeParse(request);
   if (!parsed.success)
     return { ok: false, reason: parsed.error.issues[0]?.message ?? 'the request is no longer valid' };
   try {
-    const kit = buildKit(parsed.data);
-    return { ok: true, hashes: stlHashes(kit.files), zip: () => zipKit(kit) };
+    const kit = await geometry.kitZip(parsed.data);
+    return { ok: true, hashes: kit.hashes, zip: kit.zip };
   } catch (err) {
     return { ok: false, reason: err instanceof Error ? err.message : String(err) };
   }
@@ -64,7 +63,7 @@ async function entryOf(ctx: AppContext, user: SessionUser, teamId: string, id: s
 export async function checkKit(ctx: AppContext, user: SessionUser, teamId: string, id: string): Promise<KitCheck> {
   const row = await entryOf(ctx, user, teamId, id);
   const base = { recordedEngine: row.engineVersion, currentEngine: ENGINE_VERSION, original: true };
-  const rebuilt = rebuild(row.request);
+  const rebuilt = await rebuild(ctx.geometry, row.request);
   if (!rebuilt.ok) {
     const files = row.files.map((f) => ({
       name: f.name,
@@ -104,7 +103,7 @@ export async function downloadKit(
     const zip = await repo.findKitZip(ctx.db, teamId, id);
     return { fileName: row.fileName, zip: zip!, identical: true };
   }
-  const rebuilt = rebuild(row.request);
+  const rebuilt = await rebuild(ctx.geometry, row.request);
   if (!rebuilt.ok) {
     throw new AppError(
       'GEOMETRY_IMPOSSIBLE',
@@ -113,5 +112,5 @@ export async function downloadKit(
   }
   const identical = compare(row.files, rebuilt.hashes).every((f) => f.status === 'same');
   const fileName = identical ? row.fileName : row.fileName.replace(/\.zip$/, `-rebuilt-${ENGINE_VERSION}.zip`);
-  return { fileName, zip: await rebuilt.zip(), identical };
+  return { fileName, zip: rebuilt.zip, identical };
 }

@@ -1,20 +1,20 @@
 import type { Executor } from '../../db/executor';
 import type { SessionUser } from '../../auth/sessions';
 import { AppError } from '../../errors/app-error';
-import { buildKit } from '../../../shared/kit/build-kit';
 import type { KitManifest } from '../../../shared/kit/kit-manifest';
 import type { KitSummary, ParsedRecordKitInput } from '../../../shared/schemas/kit-history';
 import type { PrinterProfile } from '../../../shared/schemas/printer-profile';
 import { kitRequestSchema } from '../../../shared/schemas/kit-request';
 import { requireTeamRole } from '../teams/team-access';
 import { kitFileName } from '../kits/kits.service';
+import { asBuffer } from '../kits/kit-zip';
 import { findPreset } from '../presets/presets.repository';
 import { findVersion } from '../presets/preset-versions.repository';
 import { findProfile } from '../printer-profiles/printer-profiles.repository';
 import { findMaterial } from '../materials/materials.repository';
 import { applyCalibration, namedDerivation, type CalibratedRequest } from './kit-calibration';
 import { applyTeamMaterial } from './kit-material';
-import { stlHashes, zipKit } from './kit-bytes';
+import type { Geometry } from '../../geometry/geometry';
 import { ENGINE_VERSION } from './engine-version';
 import { insertKitDownload } from './kit-history.repository';
 
@@ -88,9 +88,16 @@ async function teamMaterialOf(db: Executor, teamId: string, id: string | null) {
  * and the zip itself. Any member may (viewers download kits too).
  *
  * @param db - the database, or the seed's transaction
+ * @param geometry - where the kit is built: the server's worker threads, or inline for the seed
  * @returns the history id, the download name, the zip and the clearance per side it was built with
  */
-export async function recordKit(db: Executor, user: SessionUser, teamId: string, input: ParsedRecordKitInput) {
+export async function recordKit(
+  db: Executor,
+  geometry: Geometry,
+  user: SessionUser,
+  teamId: string,
+  input: ParsedRecordKitInput,
+) {
   await requireTeamRole(db, teamId, user, 'viewer');
   const preset = await presetOf(db, teamId, input);
   // An explicit null means "no printer", as the design screen's preview showed; only a missing field defers to
@@ -107,8 +114,9 @@ export async function recordKit(db: Executor, user: SessionUser, teamId: string,
   // Parsed once more so the keys come in the schema's order: jsonb keeps no key order, and a rebuild from the
   // stored request must write the very same manifest.json (a resolved request parses again to itself).
   const request = kitRequestSchema.parse(calibrated.request);
-  const kit = buildKit(request);
-  const zip = await zipKit(kit);
+  const kit = await geometry.kitZip(request);
+  // The thread hands back a plain Uint8Array; the bytea column wants a Buffer (same bytes, no copy).
+  const zip = asBuffer(kit.zip);
   const fileName = kitFileName(request);
   const id = await insertKitDownload(db, {
     teamId,
@@ -122,7 +130,7 @@ export async function recordKit(db: Executor, user: SessionUser, teamId: string,
     calibration,
     request: request as Record<string, unknown>,
     summary: summaryOf(kit.manifest, calibration, teamMaterial?.id ?? null),
-    files: stlHashes(kit.files),
+    files: kit.hashes,
     fileName,
     engineVersion: ENGINE_VERSION,
     zip,

@@ -45,3 +45,8 @@ export function downloadName(label: string, request: unknown): string {
   const digest = createHash('sha256').update(JSON.stringify(request)).digest('hex').slice(0, 8);
   return `seamwright-${label}-${digest}.zip`;
 }
+
+/** A zip's bytes as a Buffer for `res.send`, without copying (a thread hop hands back a plain Uint8Array). */
+export function asBuffer(bytes: Uint8Array): Buffer {
+  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+}

@@ -1,7 +1,6 @@
-import type { Writable } from 'node:stream';
-import { buildKit } from '../../../shared/kit/build-kit';
+import type { Geometry } from '../../geometry/geometry';
 import type { ResolvedKitRequest } from '../../../shared/schemas/kit-request';
-import { downloadName, withManifest, writeZip } from './kit-zip';
+import { downloadName } from './kit-zip';
 
 /** The download name of a kit: "seamwright-key-kit-3f9a1c2e.zip", the same for the same request. */
 export function kitFileName(request: ResolvedKitRequest): string {
@@ -9,17 +8,13 @@ export function kitFileName(request: ResolvedKitRequest): string {
 }
 
 /**
- * Builds the kit; impossible geometry throws a GeometryError here, before any byte or header is sent.
- * The returned `writeTo` streams the zip.
+ * Builds the kit's zip on a geometry thread; impossible geometry or a request over the work budget rejects
+ * with a GeometryError before any byte or header is sent.
  */
-export function prepareKitZip(request: ResolvedKitRequest): {
-  fileName: string;
-  writeTo: (out: Writable) => Promise<void>;
-} {
-  const kit = buildKit(request);
-  const entries = withManifest(kit.manifest, kit.files);
-  return { fileName: kitFileName(request), writeTo: (out) => writeZip(entries, out) };
+export async function buildKitDownload(
+  geometry: Geometry,
+  request: ResolvedKitRequest,
+): Promise<{ fileName: string; zip: Uint8Array }> {
+  const { zip } = await geometry.kitZip(request);
+  return { fileName: kitFileName(request), zip };
 }
-
-/** The manifest alone (POST /api/kits/summary): the same numbers as the zip's, without writing STL files. */
-export { summarizeKit } from '../../../shared/kit/build-kit';

@@ -16,6 +16,14 @@ import type { TriangleMesh } from '../mesh/triangle-mesh';
 export function writeAsciiStl(mesh: TriangleMesh, name = 'seamwright'): string {
   const safe = name.replace(/[^A-Za-z0-9_-]/g, '_') || 'seamwright';
   const { positions: p, normals: n } = mesh;
+  // Corners are shared by about six triangles and normals repeat along every loft side, so each value's
+  // text is worked out once: the shortest-decimal search costs up to nine toPrecision calls.
+  const known = new Map<number, string>();
+  const f32 = (value: number) => {
+    let text = known.get(value);
+    if (text === undefined) known.set(value, (text = shortestFloat32(value)));
+    return text;
+  };
   const lines: string[] = [`solid ${safe}`];
   for (let t = 0; t < n.length / 3; t++) {
     lines.push(`  facet normal ${f32(n[3 * t]!)} ${f32(n[3 * t + 1]!)} ${f32(n[3 * t + 2]!)}`, '    outer loop');
@@ -30,7 +38,7 @@ export function writeAsciiStl(mesh: TriangleMesh, name = 'seamwright'): string {
 }
 
 /** Shortest decimal text that parses back to the same float32 (at most 9 significant digits). */
-function f32(value: number): string {
+function shortestFloat32(value: number): string {
   if (value === 0) return '0';
   for (let digits = 1; digits < 9; digits++) {
     const text = value.toPrecision(digits);

@@ -124,3 +124,22 @@ describe('POST /api/kits/summary', () => {
     ).toHaveLength(8);
   });
 });
+
+describe('POST /api/kits work budget', () => {
+  const { app } = useTestApp();
+
+  it('refuses a kit over the work budget up front with 422 and the numbers', async () => {
+    const res = await request(app)
+      .post('/api/kits')
+      .send({
+        ...keyKit,
+        face: { shape: 'rect', width: 1000, height: 1000 },
+        key: { shape: 'round', width: 60, depth: 8, count: 64 },
+        chordTolerance: 0.001,
+        format: 'ascii',
+      });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('GEOMETRY_IMPOSSIBLE');
+    expect(res.body.error.message).toMatch(/could be up to [\d.]+ MB of STL .* a kit may be at most 50\.0 MB/);
+  });
+});
