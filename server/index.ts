@@ -7,7 +7,9 @@ import { createLogger } from './logger';
 import { authSettingsFromEnv } from './config/auth-settings';
 import { startMailCatcher, type MailCatcher } from './mail/catcher';
 import { createSmtpMailer } from './mail/mailer';
-import { createSessions } from './auth/sessions';
+import { createGeometryPool } from './geometry/geometry-pool';
+import { startJobQueue, type JobQueue } from './jobs/job-queue';
+import { sweepExpiredJob } from './jobs/sweep-expired';
 
 // In-flight requests get this long to finish after Ctrl-C before their connections are cut.
 const SHUTDOWN_GRACE_MS = 10_000;
@@ -44,14 +46,25 @@ const mailer = createSmtpMailer({
   password: env.SMTP_PASSWORD,
   from: env.MAIL_FROM,
 });
-// Sessions that are never used again stay in the table until swept; once an hour is plenty.
-const sweep = setInterval(() => {
-  createSessions(db)
-    .sweepExpired()
-    .catch((error: unknown) => logger.warn({ err: error }, 'could not delete expired sessions'));
-}, 60 * 60_000);
-sweep.unref();
-const app = createApp({ db, logger, clientDir, mailer, outbox: catcher, auth: authSettingsFromEnv(env) });
+// Solids are built on worker threads so that requests keep being answered while kits are made.
+const geometry = createGeometryPool({ threads: env.GEOMETRY_THREADS });
+const app = createApp({ db, logger, clientDir, mailer, outbox: catcher, auth: authSettingsFromEnv(env), geometry });
+
+// Jobs (the hourly clean-up now; model work later) go through pg-boss on the same database, shared out
+// between every server process. A database that is down at start-up only delays them: retry until it answers.
+const JOB_RETRY_MS = 15_000;
+let jobs: JobQueue | undefined;
+let jobsTimer: NodeJS.Timeout | undefined;
+async function startJobs() {
+  try {
+    jobs = await startJobQueue(env.DATABASE_URL, [sweepExpiredJob(db)], logger);
+  } catch (error) {
+    logger.warn({ err: error }, `the job queue could not start; trying again in ${JOB_RETRY_MS / 1000} s`);
+    jobsTimer = setTimeout(() => void startJobs(), JOB_RETRY_MS);
+    jobsTimer.unref();
+  }
+}
+void startJobs();
 
 const server = app.listen(env.PORT, env.HOST);
 server.on('listening', () => {
@@ -75,6 +88,9 @@ function shutdown(signal: string) {
   const force = setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS);
   force.unref();
   server.close(async () => {
+    clearTimeout(jobsTimer);
+    await jobs?.stop().catch((error: unknown) => logger.warn({ err: error }, 'job queue did not stop cleanly'));
+    await geometry.close();
     await catcher?.close();
     await pool.end();
     logger.info('stopped');

@@ -34,6 +34,8 @@ const envSchema = z.object({
   RATE_LIMIT_SIGN_UP: z.coerce.number().int().positive().default(5),
   RATE_LIMIT_RESET: z.coerce.number().int().positive().default(5),
   // Counters are kept in PostgreSQL under this name, shared by every server process that uses the same one.
+  // Worker threads that build solids; default one per core.
+  GEOMETRY_THREADS: z.coerce.number().int().min(1).max(64).optional(),
   RATE_LIMIT_SCOPE: z
     .string()
     .regex(/^[A-Za-z0-9_-]{1,40}$/, { error: () => 'must be 1–40 letters, digits, - or _' })
