@@ -12,6 +12,9 @@ export const meSchema = z.object({
 });
 export type Me = z.infer<typeof meSchema>;
 
+/** The reply of `GET /api/session`: the same as `GET /api/me` when signed in, `{ "me": null }` otherwise. */
+export const sessionReplySchema = z.object({ me: meSchema.nullable() });
+
 /**
  * Units a person sees and types lengths in: millimetres or inches. Display and entry only — every
  * stored and sent length stays in millimetres.

@@ -1,17 +1,15 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { useCallback, useSyncExternalStore } from 'react';
-import { meSchema, type Me } from '../../shared/schemas/account';
+import { sessionReplySchema, type Me } from '../../shared/schemas/account';
 import type { TeamSummary } from '../../shared/schemas/team';
-import { ApiError, apiFetch } from './api-client';
+import { apiFetch } from './api-client';
 
-/** Who is signed in: the reply of GET /api/me, or null when nobody is (401). */
+/**
+ * Who is signed in, or null when nobody is. Asks GET /api/session, which answers 200 either way: a 401 from
+ * /api/me would show as a failed request in a visitor's console on every page.
+ */
 export async function getMe(): Promise<Me | null> {
-  try {
-    return meSchema.parse(await apiFetch('/me'));
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 401) return null;
-    throw error;
-  }
+  return sessionReplySchema.parse(await apiFetch('/session')).me;
 }
 
 export const meQueryKey = ['me'] as const;

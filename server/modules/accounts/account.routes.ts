@@ -6,13 +6,17 @@ import { changePasswordSchema, updateAccountSchema } from '../../../shared/schem
 import { changePassword, getAccount, getMe, updateAccount } from './account.service';
 
 /**
- * GET /api/me (fixed contract; 401 signed out) · GET /api/account · PATCH /api/account (units) ·
+ * GET /api/me (fixed contract; 401 signed out) · GET /api/session (200 for anyone: {"me": <the /api/me reply> | null},
+ * so a visitor's page load logs no failed request) · GET /api/account · PATCH /api/account (units) ·
  * POST /api/account/password.
  */
 export function accountRoutes(ctx: AppContext): Router {
   const router = Router();
   router.get('/me', async (req, res) => {
     res.json(await getMe(ctx.db, requireUser(req)));
+  });
+  router.get('/session', async (req, res) => {
+    res.json({ me: req.auth ? await getMe(ctx.db, req.auth.user) : null });
   });
   router.get('/account', async (req, res) => {
     res.json(await getAccount(ctx, requireUser(req).id));

@@ -219,6 +219,7 @@ const rows: Row[] = [
     expect: all(400),
   },
   { route: 'GET /api/me', expect: signedIn(200) },
+  { route: 'GET /api/session', expect: all(200) },
   { route: 'GET /api/account', expect: signedIn(200) },
   { route: 'PATCH /api/account', body: () => ({ units: 'in' }), expect: signedIn(200) },
   {
