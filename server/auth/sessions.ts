@@ -85,7 +85,13 @@ export function readSessionCookie(cookieHeader: string | undefined): string | nu
   if (!cookieHeader) return null;
   for (const part of cookieHeader.split(';')) {
     const [name, ...rest] = part.trim().split('=');
-    if (name === SESSION_COOKIE) return decodeURIComponent(rest.join('=')) || null;
+    if (name !== SESSION_COOKIE) continue;
+    // A cookie mangled by hand or by a proxy (a broken %-escape) is no session, not an error.
+    try {
+      return decodeURIComponent(rest.join('=')) || null;
+    } catch {
+      return null;
+    }
   }
   return null;
 }

@@ -1,6 +1,6 @@
 import { placeKeys } from '../../shared/geometry/layout';
 import { placeRails } from '../../shared/geometry/place-rails';
-import { keySection } from '../../shared/geometry/section/key-section';
+import { pocketSection } from '../../shared/geometry/section/pocket-section';
 import { dovetailSection } from '../../shared/geometry/section/dovetail-section';
 import { degreesToRadians } from '../../shared/geometry/units';
 import { keyFootprint, keyLabel } from '../../shared/kit/key-footprint';
@@ -16,7 +16,7 @@ export function layoutOnly(request: ResolvedKitRequest): unknown {
   if (request.joint === 'key') {
     const k = request.key;
     const fit = keyKitFit(request);
-    const section = keySection({ ...k, chordTolerance: request.chordTolerance });
+    const section = pocketSection({ ...k, chordTolerance: request.chordTolerance });
     const footprint = keyFootprint(section, fit.pocketGrowth + k.entryChamfer, k.shape === 'round');
     return placeKeys({ face: request.face, footprint, margin: k.margin, count: k.count, keyLabel: keyLabel(k) });
   }

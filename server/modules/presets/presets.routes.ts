@@ -1,4 +1,5 @@
 import { Router, type Request } from 'express';
+import { MAX_VERSION } from '../../../shared/schemas/library-fields';
 import type { AppContext } from '../../app-context';
 import { AppError } from '../../errors/app-error';
 import { requireUser } from '../../http/current-user';
@@ -20,7 +21,8 @@ const ids = (req: Request) => ({ teamId: uuidParam(req, 'teamId', 'team'), id: u
 
 function versionParam(req: Request): number {
   const n = Number(req.params.version);
-  if (!Number.isInteger(n) || n < 1) throw new AppError('NOT_FOUND', 'There is no such version.');
+  // Past the column's range no version can exist: say so before any query runs.
+  if (!Number.isInteger(n) || n < 1 || n > MAX_VERSION) throw new AppError('NOT_FOUND', 'There is no such version.');
   return n;
 }
 

@@ -1,4 +1,5 @@
 import { offsetConvexPolygon } from '../../../../shared/geometry/section/offset-convex-polygon';
+import { pocketSection } from '../../../../shared/geometry/section/pocket-section';
 import { keySection } from '../../../../shared/geometry/section/key-section';
 import { meshKit } from '../../../../shared/kit/build-kit';
 import type { KitManifest } from '../../../../shared/kit/kit-manifest';
@@ -41,7 +42,10 @@ export function previewKit(request: ResolvedKitRequest): PreviewKit {
   if (request.joint === 'key') {
     const k = request.key;
     const scale = manifest.keyScale ?? 1;
-    const section = keySection({ ...k, chordTolerance: request.chordTolerance });
+    const sectionParams = { ...k, chordTolerance: request.chordTolerance };
+    const section = keySection(sectionParams);
+    // The pocket is drawn as it is cut: a round one circumscribes its circle (see pocketSection).
+    const pocketBase = pocketSection(sectionParams);
     const growth = manifest.derived.pocketGrowthPerSide ?? 0;
     const keyMesh = meshes[0]!;
     return {
@@ -50,7 +54,7 @@ export function previewKit(request: ResolvedKitRequest): PreviewKit {
       keyInPlace: toRenderMesh(keyInPlace(keyMesh, (k.width / 2) * scale)),
       outlines: {
         key: section.map(([x, y]) => [x * scale, y * scale]),
-        pocket: (growth > 0 ? offsetConvexPolygon(section, growth) : section).map(([x, y]) => [x, y]),
+        pocket: (growth > 0 ? offsetConvexPolygon(pocketBase, growth) : pocketBase).map(([x, y]) => [x, y]),
       },
     };
   }
