@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createGeometryPool } from '../../../server/geometry/geometry-pool';
 import { inlineGeometry } from '../../../server/geometry/inline-geometry';
@@ -23,6 +24,15 @@ describe('createGeometryPool', () => {
     expect(threaded.hashes).toEqual(inline.hashes);
     expect(threaded.manifest).toEqual(inline.manifest);
     expect(pool.stats().completed).toBeGreaterThanOrEqual(1);
+  });
+
+  it.runIf(process.platform === 'linux')('runs its threads at a lower priority than the event loop', async () => {
+    await pool.kitSummary(request);
+    const nice = execFileSync('ps', ['-L', '-o', 'ni=', '-p', String(process.pid)], { encoding: 'utf8' })
+      .split('\n')
+      .map((v) => Number(v.trim()));
+    expect(nice).toContain(10);
+    expect(nice).toContain(0);
   });
 
   it('hands back a GeometryError with its code and numbers when the geometry is impossible', async () => {
