@@ -47,7 +47,15 @@ export function estimateKitWork(request: ResolvedKitRequest): KitWorkEstimate {
     const k = request.key;
     const section = keySection({ ...k, chordTolerance: request.chordTolerance });
     corners = section.length;
-    pieces = k.count ?? Math.min(MAX_KEYS, Math.max(1, Math.floor(faceArea(request.face) / polygonArea(section))));
+    pieces =
+      k.count ??
+      Math.min(
+        MAX_KEYS,
+        Math.max(
+          1,
+          Math.floor(faceArea(request.face) / faceArea({ shape: 'polygon', points: section.map(([x, y]) => [x, y]) })),
+        ),
+      );
     solids = 1 + 2 * pieces;
   } else {
     corners = DOVETAIL_CORNERS;
@@ -58,11 +66,4 @@ export function estimateKitWork(request: ResolvedKitRequest): KitWorkEstimate {
   const perTriangle = request.format === 'ascii' ? ASCII_BYTES_PER_TRIANGLE : BINARY_BYTES_PER_TRIANGLE;
   const files = request.joint === 'key' ? 3 : 2;
   return { triangles, stlBytes: files * STL_HEADER_BYTES + triangles * perTriangle, pieces, sectionCorners: corners };
-}
-
-function polygonArea(ring: readonly (readonly [number, number])[]): number {
-  let twice = 0;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++)
-    twice += ring[j]![0] * ring[i]![1] - ring[i]![0] * ring[j]![1];
-  return Math.abs(twice) / 2;
 }

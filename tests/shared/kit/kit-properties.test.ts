@@ -20,6 +20,7 @@ import { loadManifold, manifoldOf } from '../../helpers/mesh/manifold-check';
 import { near, sliceMesh, support } from '../../helpers/mesh/slice-mesh';
 import { readBinaryStl, referenceStl } from '../../helpers/mesh/stl-readers';
 import { dovetailRequestArb, keyRequestArb } from './kit-request-arbitrary';
+import { snapStep } from '../../helpers/mesh/section-gap';
 
 const anyRequestArb = fc.oneof(keyRequestArb, dovetailRequestArb);
 // Modest by default so the suite stays quick; raise KIT_PROPERTY_RUNS for a deeper search.
@@ -44,22 +45,6 @@ function meshOfFile(bytes: Uint8Array): TriangleMesh {
     positions.set(records.subarray(t * 12 + 3, t * 12 + 12), t * 9);
   }
   return { positions, normals };
-}
-
-/** JSCAD's snapping grid for a mesh: 1e-5 × its mean bounding-box side (measureEpsilon). */
-function snapGrid(mesh: TriangleMesh): number {
-  const p = mesh.positions;
-  let total = 0;
-  for (let a = 0; a < 3; a++) {
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let i = a; i < p.length; i += 3) {
-      lo = Math.min(lo, p[i]!);
-      hi = Math.max(hi, p[i]!);
-    }
-    total += hi - lo;
-  }
-  return (1e-5 * total) / 3;
 }
 
 let built = 0;
@@ -181,7 +166,7 @@ function checkPocketsHoldKey(request: ResolvedKeyKitRequest, kit: ReturnType<typ
     const slice = sliceMesh(mesh, 2, half === 'A' ? -depth / 2 : depth / 2);
     // Each corner moves up to half a grid step per axis when snapped, so a support distance along a unit
     // direction moves up to √2/2 grid steps; √2 × the sum bounds a difference of two, plus float32 rounding.
-    const tol = Math.SQRT2 * (snapGrid(mesh) + snapGrid(keyMesh)) + 1e-5;
+    const tol = Math.SQRT2 * (snapStep(mesh) + snapStep(keyMesh)) + 1e-5;
     // Pockets are kept `margin` apart around their layout footprints: half a margin round one picks it alone.
     const foot = keyFootprint(outline, growth + k.entryChamfer, k.shape === 'round');
     for (const p of part.positions!) {
